@@ -4,6 +4,7 @@
 #include "core/error.hpp"
 #include "fe/linear_static.hpp"
 #include "fe/structured_grid.hpp"
+#include "support/approx.hpp"
 
 #include <doctest/doctest.h>
 
@@ -50,14 +51,14 @@ TEST_CASE("a uniform end traction on a bar gives uniform stretch PL/(EA) and bal
     const Solution s = problem.solve(c.traction({10.0, 0.0}));
     const double expected = 10.0 * 100.0 / 200000.0; // σ L / E
     for (int node : c.grid.side_nodes[1])
-        CHECK(s.u(dof_ux(node)) == doctest::Approx(expected).epsilon(1e-12));
+        CHECK(s.u(dof_ux(node)) == lapwing::test::approx(expected, 1e-12));
     CHECK(s.relative_residual < 1e-12);
     const double total_reaction = [&] {
         double r = 0;
         for (int node : c.grid.side_nodes[3]) r += s.reactions(dof_ux(node));
         return r;
     }();
-    CHECK(total_reaction == doctest::Approx(-10.0 * 20.0 * 5.0).epsilon(1e-12));
+    CHECK(total_reaction == lapwing::test::approx(-10.0 * 20.0 * 5.0, 1e-12));
 }
 
 TEST_CASE("CHOLMOD and Eigen's LDLT give the same displacements; many load cases share one "
@@ -148,7 +149,7 @@ TEST_CASE("springs to ground restrain a model and carry its reaction") {
     double ground = 0;
     for (const Spring& sp : m.springs)
         if (sp.dof_a % 2 == 0) ground += sp.k * s.u(sp.dof_a);
-    CHECK(ground == doctest::Approx(300.0).epsilon(1e-9));
+    CHECK(ground == lapwing::test::approx(300.0, 1e-9));
     // No dof is constrained, so K u − f vanishes everywhere.
     CHECK(s.reactions.cwiseAbs().maxCoeff() < 1e-9 * 300.0);
 }
