@@ -39,10 +39,12 @@ public:
         ldlt_.factorize(as_eigen(pattern, values));
         stats_.seconds_factorize = seconds_since(start);
         const Eigen::VectorXd d = ldlt_.vectorD();
+        // A pivot that is not positive fails as in CHOLMOD; a positive but
+        // vanishing one is left to the caller's reciprocal-condition guard.
         int bad = -1;
         const double d_max = d.cwiseAbs().maxCoeff();
         for (int i = 0; i < d.size(); ++i)
-            if (!(d(i) > 1e-14 * d_max)) {
+            if (!(d(i) > 0)) {
                 bad = i;
                 break;
             }
