@@ -3,6 +3,7 @@
 
 #include <algorithm>
 #include <cstdio>
+#include <ctime>
 #include <fmt/format.h>
 #include <fstream>
 #include <sstream>
@@ -11,6 +12,12 @@
 #include <unistd.h>
 
 namespace lapwing::bench {
+
+double process_cpu_seconds() {
+    timespec t{};
+    clock_gettime(CLOCK_PROCESS_CPUTIME_ID, &t);
+    return static_cast<double>(t.tv_sec) + 1e-9 * static_cast<double>(t.tv_nsec);
+}
 
 double current_rss_mb() {
     std::ifstream statm("/proc/self/statm");

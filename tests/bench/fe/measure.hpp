@@ -11,15 +11,23 @@
 
 namespace lapwing::bench {
 
+// CPU seconds of the whole process (every thread), CLOCK_PROCESS_CPUTIME_ID.
+// On a shared machine wall time includes the time other jobs held the core;
+// CPU time does not (it still feels their cache and memory traffic).
+double process_cpu_seconds();
+
+// Wall and CPU time since construction.
 class Stopwatch {
 public:
-    Stopwatch() : start_(std::chrono::steady_clock::now()) {}
+    Stopwatch() : start_(std::chrono::steady_clock::now()), cpu_start_(process_cpu_seconds()) {}
     double seconds() const {
         return std::chrono::duration<double>(std::chrono::steady_clock::now() - start_).count();
     }
+    double cpu_seconds() const { return process_cpu_seconds() - cpu_start_; }
 
 private:
     std::chrono::steady_clock::time_point start_;
+    double cpu_start_;
 };
 
 double current_rss_mb();
@@ -29,7 +37,8 @@ double lifetime_peak_rss_mb();
 // Time and memory of one stage: wall seconds, the peak resident memory
 // above the level at its start, and what it left resident.
 struct StageSample {
-    double seconds = 0;
+    double seconds = 0;     // wall
+    double cpu_seconds = 0; // process CPU
     double peak_mb = 0;     // VmHWM during the stage − RSS at its start
     double retained_mb = 0; // RSS at its end − RSS at its start
 };
@@ -55,6 +64,7 @@ StageSample measure(F&& f) {
     f();
     StageSample s;
     s.seconds = clock.seconds();
+    s.cpu_seconds = clock.cpu_seconds();
     s.peak_mb = std::max(0.0, peak_rss_since_reset_mb() - before);
     s.retained_mb = current_rss_mb() - before;
     return s;

@@ -16,6 +16,9 @@ struct ReferenceRun {
     double seconds_analyse = 0;
     double seconds_factorize = 0;
     double seconds_solve = 0;
+    double cpu_seconds_analyse = 0;
+    double cpu_seconds_factorize = 0;
+    double cpu_seconds_solve = 0;
     double nnz_L = 0;
     double flops = 0;
     std::string ordering; // the ordering CHOLMOD's default strategy settled on
