@@ -316,6 +316,21 @@ CaseResult run_case(const Options& o, fe::ElementKind kind, long target_dofs, in
     for (const std::string& key : out.repeats.front().keys())
         std::cout << fmt::format("result\t{}\t{}\t{}\t{:.6g}\t{}\n", fe::name(kind),
                                  plate.model.n_dofs(), key, out.median(key), repeats);
+    // The order-balanced ratios: the geometric mean of the median ratio with
+    // the reference run first and with it second, which cancels the
+    // advantage of going second (the same factor either way).
+    for (const std::string key :
+         {"ratio.lapwing_over_reference.s", "ratio.lapwing_over_reference.cpu_s",
+          "ratio.factorize_over_reference.s", "ratio.factorize_over_reference.cpu_s",
+          "ratio.analyse_over_reference.cpu_s"}) {
+        std::vector<double> first, second;
+        for (const Record& r : out.repeats)
+            (r["reference.first"] == 1 ? first : second).push_back(r[key]);
+        if (first.empty() || second.empty()) continue;
+        std::cout << fmt::format("result\t{}\t{}\t{}.balanced\t{:.6g}\t{}\n", fe::name(kind),
+                                 plate.model.n_dofs(), key,
+                                 std::sqrt(bench::median(first) * bench::median(second)), repeats);
+    }
     return out;
 }
 
