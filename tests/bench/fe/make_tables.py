@@ -4,10 +4,17 @@
 Reads the "result<TAB>kind<TAB>dofs<TAB>key<TAB>median<TAB>runs" lines that
 bench_fe_solve and bench_fe_elements print (medians over the repeats) and
 prints the tables. Usage: python3 tests/bench/fe/make_tables.py [results-dir]
+Optional sibling folders: <results-dir>_eigen (Eigen at sizes above the
+default cut-off) and <results-dir>_metis (lapwing with --ordering metis).
 """
 import glob
+import math
 import os
 import sys
+
+
+def load_cases(folder):
+    return load(folder)[0] if folder and os.path.isdir(folder) else {}
 
 
 def load(folder):
@@ -45,7 +52,8 @@ def mb(x):
 
 
 def order(cases):
-    return sorted(cases, key=lambda k: (k[1] > 0 and len(str(k[1])), k[0], k[1]))
+    """Rows by size class (10^4, 10^5, 10^6), then element kind."""
+    return sorted(cases, key=lambda k: (round(math.log10(k[1])), k[0]))
 
 
 def g(case, key):
@@ -55,10 +63,10 @@ def g(case, key):
 def stage_table(cases, suffix, title):
     out = [f"**{title}** (medians of {{runs}} runs per row)", "",
            "| case | dofs | pattern | assembly | analyse (AMD) | factorize | solve | "
-           "**lapwing** | CHOLMOD direct | **ratio** | sample + SPR | averaging |",
-           "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|"]
+           "**lapwing** | CHOLMOD direct | **ratio** | order-balanced ratio | sample + SPR | averaging |",
+           "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|"]
     runs = set()
-    for key in sorted(cases, key=lambda k: (k[1], k[0])):
+    for key in order(cases):
         c = cases[key]
         runs.add(c["runs"])
         out.append(
@@ -67,6 +75,7 @@ def stage_table(cases, suffix, title):
             f"| {t(g(c, 'solve' + suffix))} | **{t(g(c, 'lapwing' + suffix))}** "
             f"| {t(g(c, 'reference' + suffix))} "
             f"| **{g(c, 'ratio.lapwing_over_reference' + suffix):.2f}** "
+            f"| {g(c, 'ratio.lapwing_over_reference' + suffix + '.balanced'):.2f} "
             f"| {t(g(c, 'sample_stresses' + suffix) + g(c, 'recover_spr' + suffix))} "
             f"| {t(g(c, 'recover_by_averaging' + suffix))} |")
     out[0] = out[0].replace("{runs}", "/".join(str(r) for r in sorted(runs)))
@@ -77,7 +86,7 @@ def reference_table(cases):
     out = ["| case | dofs | nnz(A) | nnz(L) lapwing (AMD) | flops lapwing | GFLOP/s (CPU) "
            "| CHOLMOD default ordering | nnz(L) | flops | analyse | factorize | solve (CPU s) |",
            "|---|---:|---:|---:|---:|---:|---|---:|---:|---:|---:|---:|"]
-    for key in sorted(cases, key=lambda k: (k[1], k[0])):
+    for key in order(cases):
         c = cases[key]
         ordering = "METIS" if g(c, "reference.metis") == 1 else "AMD"
         kind = "supernodal" if g(c, "reference.supernodal") == 1 else "simplicial"
@@ -92,10 +101,10 @@ def reference_table(cases):
 
 
 def memory_table(cases):
-    out = ["| case | dofs | model + pattern | assembly | analyse | factorize | solve "
+    out = ["| case | dofs | pattern | assembly | analyse | factorize | solve "
            "| CHOLMOD direct | sample + SPR | process peak (ru_maxrss) |",
            "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|"]
-    for key in sorted(cases, key=lambda k: (k[1], k[0])):
+    for key in order(cases):
         c = cases[key]
         out.append(
             f"| {key[0]} | {key[1]:,} | {mb(g(c, 'pattern.peak_mb'))} | {mb(g(c, 'assembly.peak_mb'))} "
@@ -106,12 +115,17 @@ def memory_table(cases):
     return "\n".join(out)
 
 
-def eigen_table(cases):
+def eigen_table(cases, extra):
+    """Rows from `cases`, or for a case run without Eigen there, the same case
+    from `extra` (a run with a higher --eigen-max-dofs): its CHOLMOD and Eigen
+    figures come from that one run."""
+    cases = {k: (extra[k] if "eigen.factorize.cpu_s" not in c and k in extra else c)
+             for k, c in cases.items()}
     out = ["| case | dofs | CHOLMOD analyse + factorize + solve | Eigen analyse | Eigen factorize "
            "| Eigen solve | nnz(L) Eigen / CHOLMOD | **CHOLMOD / Eigen** total (CPU) "
            "| factorize only (CPU) | total (wall) |",
            "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|"]
-    for key in sorted(cases, key=lambda k: (k[1], k[0])):
+    for key in order(cases):
         c = cases[key]
         if "eigen.factorize.cpu_s" not in c:
             out.append(f"| {key[0]} | {key[1]:,} | not run (above the Eigen cut-off) "
@@ -133,7 +147,7 @@ def extra_table(cases):
            "| LinearStaticProblem setup + solve | its ratio to CHOLMOD direct | Kt (SPR) "
            "| Kt (averaging) | rel. difference to CHOLMOD direct |",
            "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|"]
-    for key in sorted(cases, key=lambda k: (k[1], k[0])):
+    for key in order(cases):
         c = cases[key]
         problem = t(g(c, "problem.cpu_s")) if "problem.cpu_s" in c else "not run"
         ratio = (f"{g(c, 'ratio.problem_over_reference.cpu_s'):.2f}"
@@ -144,6 +158,24 @@ def extra_table(cases):
             f"| {t(g(c, 'residual.cpu_s'))} | {t(g(c, 'reactions.cpu_s'))} | {problem} | {ratio} "
             f"| {g(c, 'Kt_spr'):.3f} | {g(c, 'Kt_averaging'):.3f} "
             f"| {g(c, 'reference.difference'):.1e} |")
+    return "\n".join(out)
+
+
+def ordering_table(cases, metis):
+    out = ["| case | dofs | lapwing ordering | analyse | factorize | nnz(L) | flops "
+           "| lapwing total | CHOLMOD direct (default: AMD, METIS if AMD fills badly) "
+           "| ratio (order-balanced) |",
+           "|---|---:|---|---:|---:|---:|---:|---:|---:|---:|"]
+    for key in order(metis):
+        for name, c in (("AMD (default)", cases.get(key)), ("METIS", metis[key])):
+            if c is None:
+                continue
+            out.append(
+                f"| {key[0]} | {key[1]:,} | {name} | {t(g(c, 'analyse.cpu_s'))} "
+                f"| {t(g(c, 'factorize.cpu_s'))} | {g(c, 'nnz_L'):.3g} | {g(c, 'flops'):.3g} "
+                f"| {t(g(c, 'lapwing.cpu_s'))} | {t(g(c, 'reference.cpu_s'))} "
+                f"| {g(c, 'ratio.lapwing_over_reference.cpu_s'):.2f} "
+                f"({g(c, 'ratio.lapwing_over_reference.cpu_s.balanced'):.2f}) |")
     return "\n".join(out)
 
 
@@ -160,6 +192,8 @@ def element_table(elements):
 def main():
     folder = sys.argv[1] if len(sys.argv) > 1 else "build/bench/results"
     cases, elements = load(folder)
+    eigen = load_cases(folder + "_eigen")
+    metis = load_cases(folder + "_metis")
     print(stage_table(cases, ".cpu_s", "CPU seconds"))
     print()
     print(stage_table(cases, ".s", "Wall seconds"))
@@ -168,11 +202,14 @@ def main():
     print()
     print(memory_table(cases))
     print()
-    print(eigen_table(cases))
+    print(eigen_table(cases, eigen))
     print()
     print(extra_table(cases))
     print()
     print(element_table(elements))
+    if metis:
+        print()
+        print(ordering_table(cases, metis))
 
 
 if __name__ == "__main__":
