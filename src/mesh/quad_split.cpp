@@ -3,7 +3,10 @@
 // element mesh generation", §4 on triangle-to-quad conversion).
 #include "mesh/quad_split.hpp"
 
+#include "mesh/triangle_pairing.hpp"
+
 #include <algorithm>
+#include <cmath>
 
 namespace lapwing::mesh::detail {
 
@@ -47,22 +50,40 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
         fixed[vertex_node[s.b]] = true;
     }
 
-    // Edge midpoints: one node per triangle edge, on the curve for segments.
+    // Pairs of triangles become quadrilaterals; the shared edge of a pair
+    // gets no midpoint.
+    const Pairing pairing = pair_triangles(tri);
     const size_t n_tri = tri_ids.size();
+    const auto is_diagonal = [&](int t, int e) {
+        return pairing.partner[t] >= 0 && pairing.partner_edge[t] == e;
+    };
+    // Edge split points: one node per triangle edge, on the curve for
+    // segments. Mostly at the midpoint; an edge of an unpaired triangle is
+    // split at 0.35 from its start in that triangle's counter-clockwise order,
+    // a pinwheel that lifts the det J ratio of an equilateral triangle's three
+    // quadrilaterals from 1/3 (at midpoints) to 0.47.
+    constexpr double pinwheel = 0.35;
+    const auto unpaired = [&](int t) { return t >= 0 && pairing.partner[t] < 0; };
     std::vector<std::array<int, 3>> mid(n_tri, {-1, -1, -1});
+    std::vector<std::array<double, 3>> split_t(n_tri, {0.5, 0.5, 0.5}); // segment parameter
     for (size_t i = 0; i < n_tri; ++i) {
-        const Triangle& t = tris[tri_ids[i]];
+        const int ti = tri_ids[i];
+        const Triangle& t = tris[ti];
         for (int e = 0; e < 3; ++e) {
-            if (mid[i][e] >= 0) continue;
+            if (mid[i][e] >= 0 || is_diagonal(ti, e)) continue;
             const int node = static_cast<int>(mesh.nodes.size());
             const Point& a = pts[t.v[(e + 1) % 3]];
             const Point& b = pts[t.v[(e + 2) % 3]];
+            double lambda = 0.5;
+            if (unpaired(ti) && !unpaired(t.nbr[e])) lambda = pinwheel;
+            if (!unpaired(ti) && unpaired(t.nbr[e])) lambda = 1.0 - pinwheel;
             if (t.seg[e] >= 0) {
                 const Segment& s = tri.segments()[t.seg[e]];
-                mesh.nodes.push_back(tm.curves[s.curve].point_at(0.5 * (s.t0 + s.t1)));
+                split_t[i][e] = s.t0 + lambda * (s.t1 - s.t0);
+                mesh.nodes.push_back(tm.curves[s.curve].point_at(split_t[i][e]));
                 fixed.push_back(true);
             } else {
-                mesh.nodes.push_back(0.5 * (a + b));
+                mesh.nodes.push_back(a + lambda * (b - a));
                 fixed.push_back(false);
             }
             mid[i][e] = node;
@@ -70,44 +91,86 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
                 const int j = compact[t.nbr[e]];
                 const Triangle& u = tris[t.nbr[e]];
                 for (int k = 0; k < 3; ++k)
-                    if (u.nbr[k] == tri_ids[i]) mid[j][k] = node;
+                    if (u.nbr[k] == ti) mid[j][k] = node;
             }
         }
     }
-    const int first_centroid = static_cast<int>(mesh.nodes.size());
-    for (int t : tri_ids) {
-        const Triangle& tr = tris[t];
-        mesh.nodes.push_back((pts[tr.v[0]] + pts[tr.v[1]] + pts[tr.v[2]]) / 3.0);
-        fixed.push_back(false);
-    }
 
-    // Quadrilateral at corner i of triangle (v0, v1, v2): v_i, midpoint of
-    // edge (v_i, v_i+1), centroid, midpoint of edge (v_i-1, v_i). The midpoint
-    // of edge (v_i, v_i+1) is the one opposite v_i+2.
+    // Cells: a triangle, or a pair as quadrilateral (v_e, v_e+1, w, v_e+2)
+    // where w is the partner's far vertex. Each cell edge knows its midpoint
+    // node and its boundary segment.
+    struct CellEdge {
+        int mid, seg;
+        double split_t;
+    };
     std::vector<int> quads;
     quads.reserve(12 * n_tri);
     std::vector<BoundaryHalf> halves;
     for (size_t i = 0; i < n_tri; ++i) {
-        const Triangle& t = tris[tri_ids[i]];
-        const int g = first_centroid + static_cast<int>(i);
-        for (int c = 0; c < 3; ++c) {
-            const int next = (c + 1) % 3, prev = (c + 2) % 3;
-            const int q = static_cast<int>(quads.size() / 4);
-            quads.insert(quads.end(), {vertex_node[t.v[c]], mid[i][prev], g, mid[i][next]});
-            // Edge 0 lies on triangle edge (v_c, v_next) = opposite v_prev; edge 3 on (v_prev,
-            // v_c).
-            if (t.seg[prev] >= 0) {
-                const Segment& s = tri.segments()[t.seg[prev]];
-                halves.push_back({q, 0, s.curve, s.t0, 0.5 * (s.t0 + s.t1)});
+        const int ti = tri_ids[i];
+        const Triangle& t = tris[ti];
+        const int partner = pairing.partner[ti];
+        if (partner >= 0 && partner < ti) continue; // cell emitted with its lower triangle
+        std::array<int, 4> corner{};
+        std::array<CellEdge, 4> edge{};
+        int n_corners = 3;
+        if (partner < 0) {
+            for (int c = 0; c < 3; ++c) {
+                corner[c] = t.v[c];
+                const int opp = (c + 2) % 3; // edge (v_c, v_c+1) is opposite v_c+2
+                edge[c] = {mid[i][opp], t.seg[opp], split_t[i][opp]};
             }
-            if (t.seg[next] >= 0) {
-                const Segment& s = tri.segments()[t.seg[next]];
-                halves.push_back({q, 3, s.curve, 0.5 * (s.t0 + s.t1), s.t1});
+        } else {
+            const int e = pairing.partner_edge[ti];
+            const int j = compact[partner];
+            const Triangle& u = tris[partner];
+            const int w = pairing.partner_edge[partner];
+            const int a = t.v[(e + 1) % 3], b = t.v[(e + 2) % 3];
+            // u holds b → a; its edge (a, w) is opposite b, (w, b) opposite a.
+            int ub = 0, ua = 0;
+            while (u.v[ub] != b) ++ub;
+            while (u.v[ua] != a) ++ua;
+            corner = {t.v[e], a, u.v[w], b};
+            const int t_opp_b = (e + 2) % 3, t_opp_a = (e + 1) % 3;
+            edge = {CellEdge{mid[i][t_opp_b], t.seg[t_opp_b], split_t[i][t_opp_b]},
+                    CellEdge{mid[j][ub], u.seg[ub], split_t[j][ub]},
+                    CellEdge{mid[j][ua], u.seg[ua], split_t[j][ua]},
+                    CellEdge{mid[i][t_opp_a], t.seg[t_opp_a], split_t[i][t_opp_a]}};
+            n_corners = 4;
+        }
+        Point centre = Point::Zero();
+        for (int c = 0; c < n_corners; ++c) centre += pts[corner[c]];
+        const int g = static_cast<int>(mesh.nodes.size());
+        mesh.nodes.push_back(centre / n_corners);
+        fixed.push_back(false);
+        // Quadrilateral at corner c: v_c, midpoint of cell edge c, centre,
+        // midpoint of cell edge c-1. Its edge 0 lies on cell edge c, its edge
+        // 3 on cell edge c-1.
+        for (int c = 0; c < n_corners; ++c) {
+            const int prev = (c + n_corners - 1) % n_corners;
+            const int q = static_cast<int>(quads.size() / 4);
+            quads.insert(quads.end(), {vertex_node[corner[c]], edge[c].mid, g, edge[prev].mid});
+            if (edge[c].seg >= 0) {
+                const Segment& s = tri.segments()[edge[c].seg];
+                halves.push_back({q, 0, s.curve, s.t0, edge[c].split_t});
+            }
+            if (edge[prev].seg >= 0) {
+                const Segment& s = tri.segments()[edge[prev].seg];
+                halves.push_back({q, 3, s.curve, edge[prev].split_t, s.t1});
             }
         }
     }
 
-    smooth(mesh.nodes, quads, fixed, smoothing_passes);
+    std::vector<Eigen::Vector2d> curved_mid;
+    if (fe::is_quadratic(kind)) {
+        curved_mid.assign(quads.size(), Eigen::Vector2d::Constant(std::nan("")));
+        for (const BoundaryHalf& h : halves) {
+            const geometry::Curve& c = tm.curves[h.curve];
+            if (c.kind == geometry::CurveKind::arc)
+                curved_mid[4 * h.quad + h.local_edge] = c.point_at(0.5 * (h.t0 + h.t1));
+        }
+    }
+    smooth(mesh.nodes, quads, fixed, curved_mid, smoothing_passes);
 
     // Quadratic nodes: one per quadrilateral edge, shared by the two elements
     // that meet there. Quadrilateral edges are numbered by their lower corner

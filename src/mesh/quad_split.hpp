@@ -14,8 +14,13 @@ Mesh split_into_quads(const TriangleMesh& triangles, fe::ElementKind kind, int s
 
 // Constrained Laplacian smoothing of the nodes not flagged `fixed`, on a
 // four-node quadrilateral connectivity: a node moves to the mean of its edge
-// neighbours only if the worst corner of its elements does not get worse.
+// neighbours only if the worst of its elements does not get worse; then a
+// compass search on the corners of elements still short of the quality
+// targets. curved_mid (empty, or four per quadrilateral) holds the mid-side
+// point of each edge on a curve (NaN for straight edges) so that quadratic
+// elements are judged by their true det J.
 void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
-            const std::vector<bool>& fixed, int passes);
+            const std::vector<bool>& fixed, const std::vector<Eigen::Vector2d>& curved_mid,
+            int passes);
 
 } // namespace lapwing::mesh::detail
