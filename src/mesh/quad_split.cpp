@@ -50,33 +50,120 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
         fixed[vertex_node[s.b]] = true;
     }
 
-    // Pairs of triangles become quadrilaterals; the shared edge of a pair
-    // gets no midpoint.
-    const Pairing pairing = pair_triangles(tri);
+    // Cells: a pair of triangles (quadrilateral) or a lone triangle. (A lone
+    // triangle cannot join a neighbouring pair: the three triangles always
+    // share a vertex, where the pentagon's angle is near 180°.)
+    const Pairing pairing = pair_triangles(tri, tm.curves);
     const size_t n_tri = tri_ids.size();
-    const auto is_diagonal = [&](int t, int e) {
-        return pairing.partner[t] >= 0 && pairing.partner_edge[t] == e;
+    std::vector<int> cell(tris.size(), -1);
+    std::vector<std::array<int, 2>> members;
+    for (int t : tri_ids) {
+        if (cell[t] >= 0) continue;
+        cell[t] = static_cast<int>(members.size());
+        members.push_back({t, -1});
+        if (pairing.partner[t] >= 0) {
+            cell[pairing.partner[t]] = cell[t];
+            members.back()[1] = pairing.partner[t];
+        }
+    }
+    const auto cell_size = [&](int c) { return members[c][1] >= 0 ? 2 : 1; };
+    const auto is_internal = [&](int t, int e) {
+        return tris[t].nbr[e] >= 0 && cell[tris[t].nbr[e]] == cell[t];
     };
-    // Edge split points: one node per triangle edge, on the curve for
-    // segments. Mostly at the midpoint; an edge of an unpaired triangle is
-    // split at 0.35 from its start in that triangle's counter-clockwise order,
-    // a pinwheel that lifts the det J ratio of an equilateral triangle's three
-    // quadrilaterals from 1/3 (at midpoints) to 0.47.
-    constexpr double pinwheel = 0.35;
-    const auto unpaired = [&](int t) { return t >= 0 && pairing.partner[t] < 0; };
+    // Boundary edges (triangle, edge) of a cell, chained counter-clockwise;
+    // empty if they do not form one simple loop.
+    const auto outline_of = [&](int c) {
+        std::vector<std::pair<int, int>> edges, chain;
+        for (int t : members[c]) {
+            if (t < 0) continue;
+            for (int e = 0; e < 3; ++e)
+                if (!is_internal(t, e)) edges.push_back({t, e});
+        }
+        const auto from = [&](std::pair<int, int> te) {
+            return tris[te.first].v[(te.second + 1) % 3];
+        };
+        const auto to = [&](std::pair<int, int> te) {
+            return tris[te.first].v[(te.second + 2) % 3];
+        };
+        chain.push_back(edges[0]);
+        while (chain.size() < edges.size()) {
+            bool found = false;
+            for (const auto& te : edges) {
+                if (from(te) == to(chain.back())) {
+                    chain.push_back(te);
+                    found = true;
+                    break;
+                }
+            }
+            if (!found || from(chain.back()) == from(chain.front()))
+                return std::vector<std::pair<int, int>>{};
+        }
+        if (to(chain.back()) != from(chain.front())) return std::vector<std::pair<int, int>>{};
+        return chain;
+    };
+    // Edge split points: one node per triangle edge between cells, on the
+    // curve for segments. Mostly at the midpoint; on the edges of a lone
+    // triangle the split point slides along the edge so that its three
+    // quadrilaterals improve: at midpoints an equilateral triangle's
+    // quadrilaterals have a det J ratio of 1/3, split at 0.35 from each
+    // edge's start (a pinwheel) 0.47. Each lone triangle tries a few
+    // positions per edge it owns (edges shared with another lone triangle
+    // stay at the midpoint) and keeps the best by polygon_split_score.
+    const auto lone = [&](int t) { return t >= 0 && cell_size(cell[t]) == 1; };
+    const auto point_on_edge = [&](int t, int e, double lambda) -> Point {
+        const Triangle& tr = tris[t];
+        if (tr.seg[e] >= 0) {
+            const Segment& s = tri.segments()[tr.seg[e]];
+            return tm.curves[s.curve].point_at(s.t0 + lambda * (s.t1 - s.t0));
+        }
+        return pts[tr.v[(e + 1) % 3]] + lambda * (pts[tr.v[(e + 2) % 3]] - pts[tr.v[(e + 1) % 3]]);
+    };
+    std::vector<std::array<double, 3>> lambda_of(n_tri,
+                                                 {0.5, 0.5, 0.5}); // from the edge's start in t
+    {
+        constexpr std::array<double, 5> options{0.35, 0.5, 0.65, 0.42, 0.58};
+        std::vector<Point> corners(3), points(3);
+        for (size_t i = 0; i < n_tri; ++i) {
+            const int t = tri_ids[i];
+            if (!lone(t)) continue;
+            std::array<int, 3> n_opt{};
+            for (int e = 0; e < 3; ++e) n_opt[e] = lone(tris[t].nbr[e]) ? 1 : 5;
+            for (int c = 0; c < 3; ++c) corners[c] = pts[tris[t].v[c]];
+            double best = -HUGE_VAL;
+            std::array<double, 3> best_lambda{0.35, 0.35, 0.35};
+            for (int a0 = 0; a0 < n_opt[0]; ++a0)
+                for (int a1 = 0; a1 < n_opt[1]; ++a1)
+                    for (int a2 = 0; a2 < n_opt[2]; ++a2) {
+                        const std::array<double, 3> l{n_opt[0] > 1 ? options[a0] : 0.5,
+                                                      n_opt[1] > 1 ? options[a1] : 0.5,
+                                                      n_opt[2] > 1 ? options[a2] : 0.5};
+                        // Cell edge c runs from v_c to v_c+1: the triangle edge opposite v_c+2.
+                        for (int c = 0; c < 3; ++c)
+                            points[c] = point_on_edge(t, (c + 2) % 3, l[(c + 2) % 3]);
+                        const double score = polygon_split_score(corners, points);
+                        if (score > best + 1e-12) best = score, best_lambda = l;
+                    }
+            lambda_of[i] = best_lambda;
+        }
+    }
     std::vector<std::array<int, 3>> mid(n_tri, {-1, -1, -1});
     std::vector<std::array<double, 3>> split_t(n_tri, {0.5, 0.5, 0.5}); // segment parameter
     for (size_t i = 0; i < n_tri; ++i) {
         const int ti = tri_ids[i];
         const Triangle& t = tris[ti];
         for (int e = 0; e < 3; ++e) {
-            if (mid[i][e] >= 0 || is_diagonal(ti, e)) continue;
+            if (mid[i][e] >= 0 || is_internal(ti, e)) continue;
             const int node = static_cast<int>(mesh.nodes.size());
             const Point& a = pts[t.v[(e + 1) % 3]];
             const Point& b = pts[t.v[(e + 2) % 3]];
             double lambda = 0.5;
-            if (unpaired(ti) && !unpaired(t.nbr[e])) lambda = pinwheel;
-            if (!unpaired(ti) && unpaired(t.nbr[e])) lambda = 1.0 - pinwheel;
+            if (lone(ti)) lambda = lambda_of[i][e];
+            if (!lone(ti) && lone(t.nbr[e])) {
+                const int j = compact[t.nbr[e]];
+                const Triangle& u = tris[t.nbr[e]];
+                for (int k = 0; k < 3; ++k)
+                    if (u.nbr[k] == ti) lambda = 1.0 - lambda_of[j][k];
+            }
             if (t.seg[e] >= 0) {
                 const Segment& s = tri.segments()[t.seg[e]];
                 split_t[i][e] = s.t0 + lambda * (s.t1 - s.t0);
@@ -96,63 +183,42 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
         }
     }
 
-    // Cells: a triangle, or a pair as quadrilateral (v_e, v_e+1, w, v_e+2)
-    // where w is the partner's far vertex. Each cell edge knows its midpoint
-    // node and its boundary segment.
+    // Each cell: corners and edges counter-clockwise, a centre node at the
+    // corners' mean, and one quadrilateral per corner.
+    std::vector<int> quads;
+    quads.reserve(12 * n_tri);
+    std::vector<BoundaryHalf> halves;
     struct CellEdge {
         int mid, seg;
         double split_t;
     };
-    std::vector<int> quads;
-    quads.reserve(12 * n_tri);
-    std::vector<BoundaryHalf> halves;
-    for (size_t i = 0; i < n_tri; ++i) {
-        const int ti = tri_ids[i];
-        const Triangle& t = tris[ti];
-        const int partner = pairing.partner[ti];
-        if (partner >= 0 && partner < ti) continue; // cell emitted with its lower triangle
-        std::array<int, 4> corner{};
-        std::array<CellEdge, 4> edge{};
-        int n_corners = 3;
-        if (partner < 0) {
-            for (int c = 0; c < 3; ++c) {
-                corner[c] = t.v[c];
-                const int opp = (c + 2) % 3; // edge (v_c, v_c+1) is opposite v_c+2
-                edge[c] = {mid[i][opp], t.seg[opp], split_t[i][opp]};
-            }
-        } else {
-            const int e = pairing.partner_edge[ti];
-            const int j = compact[partner];
-            const Triangle& u = tris[partner];
-            const int w = pairing.partner_edge[partner];
-            const int a = t.v[(e + 1) % 3], b = t.v[(e + 2) % 3];
-            // u holds b → a; its edge (a, w) is opposite b, (w, b) opposite a.
-            int ub = 0, ua = 0;
-            while (u.v[ub] != b) ++ub;
-            while (u.v[ua] != a) ++ua;
-            corner = {t.v[e], a, u.v[w], b};
-            const int t_opp_b = (e + 2) % 3, t_opp_a = (e + 1) % 3;
-            edge = {CellEdge{mid[i][t_opp_b], t.seg[t_opp_b], split_t[i][t_opp_b]},
-                    CellEdge{mid[j][ub], u.seg[ub], split_t[j][ub]},
-                    CellEdge{mid[j][ua], u.seg[ua], split_t[j][ua]},
-                    CellEdge{mid[i][t_opp_a], t.seg[t_opp_a], split_t[i][t_opp_a]}};
-            n_corners = 4;
+    std::vector<int> corner;
+    std::vector<CellEdge> edge;
+    for (int c = 0; c < static_cast<int>(members.size()); ++c) {
+        const auto chain = outline_of(c);
+        corner.clear();
+        edge.clear();
+        for (const auto& [t, e] : chain) {
+            const int i = compact[t];
+            corner.push_back(tris[t].v[(e + 1) % 3]);
+            edge.push_back({mid[i][e], tris[t].seg[e], split_t[i][e]});
         }
+        const int n_corners = static_cast<int>(corner.size());
         Point centre = Point::Zero();
-        for (int c = 0; c < n_corners; ++c) centre += pts[corner[c]];
+        for (int k = 0; k < n_corners; ++k) centre += pts[corner[k]];
         const int g = static_cast<int>(mesh.nodes.size());
         mesh.nodes.push_back(centre / n_corners);
         fixed.push_back(false);
-        // Quadrilateral at corner c: v_c, midpoint of cell edge c, centre,
-        // midpoint of cell edge c-1. Its edge 0 lies on cell edge c, its edge
-        // 3 on cell edge c-1.
-        for (int c = 0; c < n_corners; ++c) {
-            const int prev = (c + n_corners - 1) % n_corners;
+        // Quadrilateral at corner k: v_k, split point of cell edge k, centre,
+        // split point of cell edge k-1. Its edge 0 lies on cell edge k, its
+        // edge 3 on cell edge k-1.
+        for (int k = 0; k < n_corners; ++k) {
+            const int prev = (k + n_corners - 1) % n_corners;
             const int q = static_cast<int>(quads.size() / 4);
-            quads.insert(quads.end(), {vertex_node[corner[c]], edge[c].mid, g, edge[prev].mid});
-            if (edge[c].seg >= 0) {
-                const Segment& s = tri.segments()[edge[c].seg];
-                halves.push_back({q, 0, s.curve, s.t0, edge[c].split_t});
+            quads.insert(quads.end(), {vertex_node[corner[k]], edge[k].mid, g, edge[prev].mid});
+            if (edge[k].seg >= 0) {
+                const Segment& s = tri.segments()[edge[k].seg];
+                halves.push_back({q, 0, s.curve, s.t0, edge[k].split_t});
             }
             if (edge[prev].seg >= 0) {
                 const Segment& s = tri.segments()[edge[prev].seg];

@@ -4,9 +4,11 @@
 // ratio at the nodes).
 #include "mesh/quality.hpp"
 
-#include "mesh/shape_derivatives.hpp"
+#include "fe/isoparametric_map.hpp"
+#include "fe/quadrature.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <numbers>
 
@@ -15,30 +17,31 @@ namespace lapwing::mesh {
 ElementQuality element_quality(const Mesh& mesh, int e) {
     const auto nodes = mesh.element(e);
     const int n = static_cast<int>(nodes.size());
-    Eigen::Matrix<double, 2, 9> x = Eigen::Matrix<double, 2, 9>::Zero();
-    for (int i = 0; i < n; ++i) x.col(i) = mesh.nodes[nodes[i]];
+    std::array<fe::Vector2, 9> coords;
+    for (int i = 0; i < n; ++i) coords[i] = mesh.nodes[nodes[i]];
+    const std::span<const fe::Vector2> x(coords.data(), static_cast<size_t>(n));
 
-    // Sample points: the nine points of the 3×3 Gauss rule and the nine node
-    // positions of the reference square (corners, mid-sides, centre).
-    const double g = std::sqrt(0.6);
+    // Sample points: the 9-node lattice of the reference square and the
+    // element's stiffness quadrature points (as fe::check_element_map).
     double lo = HUGE_VAL, hi = -HUGE_VAL;
-    for (double xi : {-1.0, -g, 0.0, g, 1.0}) {
-        for (double eta : {-1.0, -g, 0.0, g, 1.0}) {
-            const bool gauss = std::abs(xi) != 1.0 && std::abs(eta) != 1.0;
-            const bool node =
-                (xi == 0.0 || std::abs(xi) == 1.0) && (eta == 0.0 || std::abs(eta) == 1.0);
-            if (!gauss && !node) continue;
-            const double det = detail::jacobian_determinant(mesh.kind, x, xi, eta);
-            lo = std::min(lo, det);
-            hi = std::max(hi, det);
-        }
+    for (int i = 0; i < 9; ++i) {
+        const fe::Vector2 r = fe::reference_node(i);
+        const double det = fe::det_J_at(mesh.kind, x, r.x(), r.y());
+        lo = std::min(lo, det);
+        hi = std::max(hi, det);
+    }
+    const fe::SquareRule rule = fe::gauss_square(fe::gauss_order(mesh.kind));
+    for (int q = 0; q < rule.n_points; ++q) {
+        const double det = fe::det_J_at(mesh.kind, x, rule.points[q].xi, rule.points[q].eta);
+        lo = std::min(lo, det);
+        hi = std::max(hi, det);
     }
     ElementQuality q;
     q.scaled_jacobian = hi > 0 ? lo / hi : -1.0;
     double min_angle = 360.0, max_angle = 0.0, min_edge = HUGE_VAL, max_edge = 0.0;
     for (int k = 0; k < 4; ++k) {
-        const Eigen::Vector2d p = x.col(k);
-        const Eigen::Vector2d a = x.col((k + 1) % 4) - p, b = x.col((k + 3) % 4) - p;
+        const Eigen::Vector2d p = coords[k];
+        const Eigen::Vector2d a = coords[(k + 1) % 4] - p, b = coords[(k + 3) % 4] - p;
         const double angle =
             std::atan2(a.x() * b.y() - a.y() * b.x(), a.dot(b)) * 180.0 / std::numbers::pi;
         const double interior = angle < 0 ? angle + 360.0 : angle;

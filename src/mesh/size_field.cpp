@@ -21,7 +21,7 @@ double point_segment_distance(const Eigen::Vector2d& p, const Eigen::Vector2d& a
 
 int elements_around_hole(const MeshSettings& settings) {
     int n = settings.elements_around_hole;
-    if (n <= 0) n = fe::is_quadratic(settings.kind) ? 16 : 32;
+    if (n <= 0) n = fe::is_quadratic(settings.kind) ? 24 : 32;
     n = std::max(n, 8);
     return (n + 3) / 4 * 4;
 }

@@ -1,10 +1,12 @@
 // Constrained Laplacian smoothing (Field 1988, "Laplacian smoothing and
 // Delaunay triangulations": plain Laplacian can invert elements, so each move
 // is kept only if it does not worsen the adjacent elements).
+#include "fe/isoparametric_map.hpp"
+#include "fe/quadrature.hpp"
 #include "mesh/quad_split.hpp"
-#include "mesh/shape_derivatives.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 
 namespace lapwing::mesh::detail {
@@ -33,24 +35,21 @@ double straight_metric(const std::vector<Eigen::Vector2d>& x, const int* q) {
 // points and the nodes, mid-sides on the curve where given.
 double curved_metric(const std::vector<Eigen::Vector2d>& x, const int* q,
                      const Eigen::Vector2d* mid) {
-    Eigen::Matrix<double, 2, 9> c = Eigen::Matrix<double, 2, 9>::Zero();
+    std::array<fe::Vector2, 8> c;
     for (int k = 0; k < 4; ++k) {
-        c.col(k) = x[q[k]];
-        c.col(4 + k) =
+        c[k] = x[q[k]];
+        c[4 + k] =
             std::isnan(mid[k].x()) ? Eigen::Vector2d(0.5 * (x[q[k]] + x[q[(k + 1) % 4]])) : mid[k];
     }
-    const double g = std::sqrt(0.6);
     double lo = HUGE_VAL, hi = -HUGE_VAL;
-    for (double xi : {-1.0, -g, 0.0, g, 1.0}) {
-        for (double eta : {-1.0, -g, 0.0, g, 1.0}) {
-            const bool node = std::abs(xi) != g && std::abs(eta) != g;
-            const bool gauss = std::abs(xi) != 1.0 && std::abs(eta) != 1.0;
-            if (!node && !gauss) continue;
-            const double d = jacobian_determinant(fe::ElementKind::Q8, c, xi, eta);
-            lo = std::min(lo, d);
-            hi = std::max(hi, d);
-        }
-    }
+    const auto sample = [&](double xi, double eta) {
+        const double d = fe::det_J_at(fe::ElementKind::Q8, c, xi, eta);
+        lo = std::min(lo, d);
+        hi = std::max(hi, d);
+    };
+    for (int i = 0; i < 9; ++i) sample(fe::reference_node(i).x(), fe::reference_node(i).y());
+    const fe::SquareRule rule = fe::gauss_square(3);
+    for (int k = 0; k < rule.n_points; ++k) sample(rule.points[k].xi, rule.points[k].eta);
     if (hi <= 0) return -1.0;
     return std::min(lo / hi / 0.3, straight_metric(x, q));
 }

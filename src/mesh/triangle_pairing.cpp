@@ -6,23 +6,17 @@
 
 #include <algorithm>
 #include <cmath>
-#include <cstdio>
-#include <cstdlib>
 
 namespace lapwing::mesh::detail {
 
-namespace {
-
-// Worst of the four sub-quadrilaterals of quadrilateral p (counter-clockwise)
-// when cut through edge midpoints and the vertex mean: min over corners of
-// the corner triangle area over the largest; -1 if a corner angle leaves
-// [30°, 150°]. A parallelogram scores 1.
-double split_score(const std::array<Point, 4>& p) {
-    const Point o = 0.25 * (p[0] + p[1] + p[2] + p[3]);
+double polygon_split_score(const std::vector<Point>& p, const std::vector<Point>& edge_point) {
+    const size_t n = p.size();
+    Point o = Point::Zero();
+    for (const Point& x : p) o += x;
+    o /= static_cast<double>(n);
     double worst = 1.0;
-    for (int k = 0; k < 4; ++k) {
-        const std::array<Point, 4> q{p[k], 0.5 * (p[k] + p[(k + 1) % 4]), o,
-                                     0.5 * (p[k] + p[(k + 3) % 4])};
+    for (size_t k = 0; k < n; ++k) {
+        const std::array<Point, 4> q{p[k], edge_point[k], o, edge_point[(k + n - 1) % n]};
         double lo = HUGE_VAL, hi = -HUGE_VAL, sine = 1.0;
         for (int c = 0; c < 4; ++c) {
             const Point a = q[(c + 1) % 4] - q[c], b = q[(c + 3) % 4] - q[c];
@@ -38,18 +32,43 @@ double split_score(const std::array<Point, 4>& p) {
     return worst;
 }
 
-std::array<Point, 4> merged(const Triangulation& tri, int t, int e) {
+namespace {
+
+// Split point of the edge opposite v[e] of triangle t: its midpoint, or
+// the curve point at the segment's middle parameter.
+Point edge_point(const Triangulation& tri, const std::vector<geometry::Curve>& curves, int t,
+                 int e) {
     const auto& T = tri.triangles()[t];
-    const auto& U = tri.triangles()[T.nbr[e]];
+    if (T.seg[e] >= 0) {
+        const Segment& s = tri.segments()[T.seg[e]];
+        return curves[s.curve].point_at(0.5 * (s.t0 + s.t1));
+    }
+    return 0.5 * (tri.points()[T.v[(e + 1) % 3]] + tri.points()[T.v[(e + 2) % 3]]);
+}
+
+// Score of merging t with its neighbour across the edge opposite v[e]:
+// quadrilateral (v_e, v_e+1, w, v_e+2), w the neighbour's far vertex.
+double merge_score(const Triangulation& tri, const std::vector<geometry::Curve>& curves, int t,
+                   int e) {
+    const auto& T = tri.triangles()[t];
+    const int u = T.nbr[e];
+    const auto& U = tri.triangles()[u];
     int w = 0;
     while (U.nbr[w] != t) ++w;
+    const int a = T.v[(e + 1) % 3], b = T.v[(e + 2) % 3];
+    int ua = 0, ub = 0;
+    while (U.v[ua] != a) ++ua;
+    while (U.v[ub] != b) ++ub;
     const auto& P = tri.points();
-    return {P[T.v[e]], P[T.v[(e + 1) % 3]], P[U.v[w]], P[T.v[(e + 2) % 3]]};
+    return polygon_split_score({P[T.v[e]], P[a], P[U.v[w]], P[b]},
+                               {edge_point(tri, curves, t, (e + 2) % 3),
+                                edge_point(tri, curves, u, ub), edge_point(tri, curves, u, ua),
+                                edge_point(tri, curves, t, (e + 1) % 3)});
 }
 
 } // namespace
 
-Pairing pair_triangles(const Triangulation& tri) {
+Pairing pair_triangles(const Triangulation& tri, const std::vector<geometry::Curve>& curves) {
     const auto& tris = tri.triangles();
     const int n = static_cast<int>(tris.size());
     Pairing p{std::vector<int>(n, -1), std::vector<int>(n, -1)};
@@ -67,7 +86,7 @@ Pairing pair_triangles(const Triangulation& tri) {
         for (int e = 0; e < 3; ++e) {
             const int u = tris[t].nbr[e];
             if (u < 0 || tris[t].seg[e] >= 0) continue;
-            const double s = split_score(merged(tri, t, e));
+            const double s = merge_score(tri, curves, t, e);
             score_of[3 * t + e] = s;
             if (u > t && s >= min_score) cands.push_back({s, t, e});
         }
@@ -126,17 +145,6 @@ Pairing pair_triangles(const Triangulation& tri) {
             if (t == start) break;
             u = old;
         }
-    }
-    if (std::getenv("LAPWING_DEBUG_PAIRING")) {
-        int isolated = 0, un = 0;
-        for (int t = 0; t < n; ++t) {
-            if (!tris[t].alive || p.partner[t] >= 0) continue;
-            ++un;
-            bool any = false;
-            for (int e = 0; e < 3; ++e) any |= score_of[3 * t + e] >= min_score;
-            isolated += any ? 0 : 1;
-        }
-        std::fprintf(stderr, "unpaired %d, with no acceptable edge %d\n", un, isolated);
     }
     return p;
 }

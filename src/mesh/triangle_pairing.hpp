@@ -4,6 +4,7 @@
 // det J differ by a factor of three even when the triangle is equilateral).
 #pragma once
 
+#include "geometry/curve.hpp"
 #include "mesh/triangulation.hpp"
 
 #include <vector>
@@ -17,6 +18,15 @@ struct Pairing {
     std::vector<int> partner_edge;
 };
 
-Pairing pair_triangles(const Triangulation& tri);
+// curves: the boundary curves the segments refer to (split points of
+// boundary edges lie on them).
+// Quality of cutting the polygon p (counter-clockwise) into quadrilaterals
+// through the points edge_point[k] on its edges k (p[k] to p[k+1]) and the
+// mean of its corners: the worst quadrilateral's corner det J ratio (min /
+// max of its corner cross products; 1 for a parallelogram), or -1 if an angle
+// falls outside [30°, 150°].
+double polygon_split_score(const std::vector<Point>& p, const std::vector<Point>& edge_point);
+
+Pairing pair_triangles(const Triangulation& tri, const std::vector<geometry::Curve>& curves);
 
 } // namespace lapwing::mesh::detail

@@ -71,7 +71,8 @@ int Triangulation::locate(const Point& p, int start, int* blocked_segment) const
             const int e = static_cast<int>((k + step) % 3); // rotate the first edge: no cycles
             const Point& a = points_[tri.v[(e + 1) % 3]];
             const Point& b = points_[tri.v[(e + 2) % 3]];
-            if (orient(a, b, p) < 0) {
+            // A point on an edge (within round-off) belongs to either side.
+            if (orient(a, b, p) < -1e-12 * (b - a).squaredNorm()) {
                 if (tri.nbr[e] < 0 || (constrained_ && tri.seg[e] >= 0)) {
                     if (blocked_segment) *blocked_segment = tri.seg[e];
                     return -1;
@@ -83,15 +84,22 @@ int Triangulation::locate(const Point& p, int start, int* blocked_segment) const
         }
         if (!moved) return t;
     }
-    // The walk failed to converge (round-off): search every triangle.
+    // The walk failed to converge (round-off): take the triangle that p is
+    // least outside of, by the smallest scaled orientation.
+    int best = -1;
+    double best_score = -HUGE_VAL;
     for (int u = 0; u < static_cast<int>(tris_.size()); ++u) {
         const Triangle& tri = tris_[u];
         if (!tri.alive) continue;
-        if (orient(points_[tri.v[0]], points_[tri.v[1]], p) >= 0 &&
-            orient(points_[tri.v[1]], points_[tri.v[2]], p) >= 0 &&
-            orient(points_[tri.v[2]], points_[tri.v[0]], p) >= 0)
-            return u;
+        double score = HUGE_VAL;
+        for (int e = 0; e < 3; ++e) {
+            const Point& a = points_[tri.v[(e + 1) % 3]];
+            const Point& b = points_[tri.v[(e + 2) % 3]];
+            score = std::min(score, orient(a, b, p) / (b - a).squaredNorm());
+        }
+        if (score > best_score) best_score = score, best = u;
     }
+    if (best_score > -1e-9) return best;
     if (blocked_segment) *blocked_segment = -1;
     return -1;
 }
