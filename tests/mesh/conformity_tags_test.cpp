@@ -69,7 +69,7 @@ TEST_CASE("the mesh is conforming: shared edges, closed boundary loops, no dupli
     }
 }
 
-TEST_CASE("every boundary edge lies on the piece its tag names; vertices and arc ends are nodes") {
+TEST_CASE("every boundary edge lies on the piece its tag names, vertices and arc ends are nodes") {
     for (auto kind : {fe::ElementKind::Q4, fe::ElementKind::Q8}) {
         mesh::MeshSettings s;
         s.kind = kind;
