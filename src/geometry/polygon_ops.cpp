@@ -176,8 +176,9 @@ std::vector<TaggedLoop> subtract_polygon(const std::vector<TaggedLoop>& region,
         Point dir;
         if (on_any(m, cut_edges, tol, &dir)) {
             // Shared boundary: keep it when the cut lies on the other side,
-            // i.e. the reversed cut edge runs against this edge.
-            if (dir.dot(e.b - e.a) < 0) kept.push_back(e);
+            // i.e. the cut's own edge runs against this edge (its reversed
+            // copy, stored here, runs along it).
+            if (dir.dot(e.b - e.a) > 0) kept.push_back(e);
         } else if (!point_in_polygon(m, cut)) {
             kept.push_back(e);
         }
