@@ -31,7 +31,7 @@ struct MeshSettings {
     // Element size at a re-entrant corner, as a fraction of element_size.
     double corner_size_ratio = 0.35;
     // Passes of constrained Laplacian smoothing of interior nodes.
-    int smoothing_passes = 4;
+    int smoothing_passes = 2;
 };
 
 // Per element: the scaled Jacobian (min det J / max det J over the element's

@@ -72,34 +72,25 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
     };
     // Boundary edges (triangle, edge) of a cell, chained counter-clockwise;
     // empty if they do not form one simple loop.
-    const auto outline_of = [&](int c) {
-        std::vector<std::pair<int, int>> edges, chain;
+    // Boundary edges (triangle, edge) of a cell, chained counter-clockwise
+    // into `chain` (at most 4 for a pair); returns their number.
+    using EdgeOf = std::pair<int, int>;
+    const auto outline_of = [&](int c, std::array<EdgeOf, 4>& chain) {
+        std::array<EdgeOf, 4> edges;
+        int n = 0;
         for (int t : members[c]) {
             if (t < 0) continue;
             for (int e = 0; e < 3; ++e)
-                if (!is_internal(t, e)) edges.push_back({t, e});
+                if (!is_internal(t, e)) edges[n++] = {t, e};
         }
-        const auto from = [&](std::pair<int, int> te) {
-            return tris[te.first].v[(te.second + 1) % 3];
-        };
-        const auto to = [&](std::pair<int, int> te) {
-            return tris[te.first].v[(te.second + 2) % 3];
-        };
-        chain.push_back(edges[0]);
-        while (chain.size() < edges.size()) {
-            bool found = false;
-            for (const auto& te : edges) {
-                if (from(te) == to(chain.back())) {
-                    chain.push_back(te);
-                    found = true;
-                    break;
-                }
-            }
-            if (!found || from(chain.back()) == from(chain.front()))
-                return std::vector<std::pair<int, int>>{};
+        const auto from = [&](EdgeOf te) { return tris[te.first].v[(te.second + 1) % 3]; };
+        const auto to = [&](EdgeOf te) { return tris[te.first].v[(te.second + 2) % 3]; };
+        chain[0] = edges[0];
+        for (int k = 1; k < n; ++k) {
+            for (int j = 0; j < n; ++j)
+                if (from(edges[j]) == to(chain[k - 1])) chain[k] = edges[j];
         }
-        if (to(chain.back()) != from(chain.front())) return std::vector<std::pair<int, int>>{};
-        return chain;
+        return n;
     };
     // Edge split points: one node per triangle edge between cells, on the
     // curve for segments. Mostly at the midpoint; on the edges of a lone
@@ -195,10 +186,12 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
     std::vector<int> corner;
     std::vector<CellEdge> edge;
     for (int c = 0; c < static_cast<int>(members.size()); ++c) {
-        const auto chain = outline_of(c);
+        std::array<EdgeOf, 4> chain;
+        const int n_chain = outline_of(c, chain);
         corner.clear();
         edge.clear();
-        for (const auto& [t, e] : chain) {
+        for (int k = 0; k < n_chain; ++k) {
+            const auto [t, e] = chain[k];
             const int i = compact[t];
             corner.push_back(tris[t].v[(e + 1) % 3]);
             edge.push_back({mid[i][e], tris[t].seg[e], split_t[i][e]});

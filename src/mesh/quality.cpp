@@ -59,14 +59,17 @@ ElementQuality element_quality(const Mesh& mesh, int e) {
 Summary summarize(std::vector<double> v) {
     Summary s;
     if (v.empty()) return s;
-    std::sort(v.begin(), v.end());
+    // Nearest rank by selection, not a full sort.
     const auto at = [&](double f) {
-        return v[static_cast<size_t>(std::floor(f * static_cast<double>(v.size() - 1)))];
+        const auto k =
+            static_cast<std::ptrdiff_t>(std::floor(f * static_cast<double>(v.size() - 1)));
+        std::nth_element(v.begin(), v.begin() + k, v.end());
+        return v[static_cast<size_t>(k)];
     };
-    s.min = v.front();
+    s.min = *std::min_element(v.begin(), v.end());
     s.p05 = at(0.05);
     s.median = at(0.5);
-    s.max = v.back();
+    s.max = *std::max_element(v.begin(), v.end());
     return s;
 }
 
