@@ -2,6 +2,7 @@
 // chains, cycles, and the rigid link's kinematics (small rotations).
 #include "core/error.hpp"
 #include "fe/constraints.hpp"
+#include "support/approx.hpp"
 
 #include <doctest/doctest.h>
 
@@ -20,13 +21,13 @@ TEST_CASE("free, prescribed and slave dofs expand to the right unknowns and offs
     Eigen::VectorXd r(3);
     r << 1.0, 2.0, 3.0;
     const Eigen::VectorXd u = map.expand(r);
-    CHECK(u(1) == doctest::Approx(0.5));
-    CHECK(u(3) == doctest::Approx(2.75));
-    CHECK(u(4) == doctest::Approx(-2.75));
+    CHECK(u(1) == lapwing::test::approx(0.5));
+    CHECK(u(3) == lapwing::test::approx(2.75));
+    CHECK(u(4) == lapwing::test::approx(-2.75));
     // Tᵀ f: a force on the slave u3 goes to its master u0 with weight 2.
     Eigen::VectorXd f = Eigen::VectorXd::Zero(6);
     f(3) = 1.0;
-    CHECK(map.restrict_to_unknowns(f)(0) == doctest::Approx(2.0));
+    CHECK(map.restrict_to_unknowns(f)(0) == lapwing::test::approx(2.0));
 }
 
 TEST_CASE("a dof constrained twice, a cycle of slaves and an out-of-range dof are errors") {
@@ -54,6 +55,6 @@ TEST_CASE("a rigid link moves a point with the reference node's translation and 
     r << 0.1, 0.2, 0.01; // ux, uy, θ of the reference
     const Eigen::VectorXd u = map.expand(r);
     // Small rotation: u_p = u_r + θ ẑ × (x_p − x_r) = (0.1 − 0.04, 0.2 + 0.03).
-    CHECK(u(dof_ux(1)) == doctest::Approx(0.06));
-    CHECK(u(dof_uy(1)) == doctest::Approx(0.23));
+    CHECK(u(dof_ux(1)) == lapwing::test::approx(0.06));
+    CHECK(u(dof_uy(1)) == lapwing::test::approx(0.23));
 }

@@ -2,6 +2,7 @@
 // Malkus, Plesha & Witt 2002, §3.9: a uniform traction on a 3-node edge gives
 // 1/6, 2/3, 1/6 of the total; on a 2-node edge 1/2, 1/2).
 #include "fe/edge_load.hpp"
+#include "support/approx.hpp"
 #include "support/fe_models.hpp"
 
 #include <cmath>
@@ -20,13 +21,13 @@ TEST_CASE(
         const double total = 3.0 * 2.0 * 2.0;
         double sum = 0;
         for (const auto& [dof, v] : f) sum += v;
-        CHECK(sum == doctest::Approx(total).epsilon(1e-14));
+        CHECK(sum == lapwing::test::approx(total, 1e-14));
         if (is_quadratic(kind)) {
-            CHECK(f[1].second == doctest::Approx(total / 6));
-            CHECK(f[3].second == doctest::Approx(2 * total / 3));
-            CHECK(f[5].second == doctest::Approx(total / 6));
+            CHECK(f[1].second == lapwing::test::approx(total / 6));
+            CHECK(f[3].second == lapwing::test::approx(2 * total / 3));
+            CHECK(f[5].second == lapwing::test::approx(total / 6));
         } else {
-            CHECK(f[1].second == doctest::Approx(total / 2));
+            CHECK(f[1].second == lapwing::test::approx(total / 2));
         }
     }
 }
@@ -36,8 +37,8 @@ TEST_CASE("a linearly varying traction gives the triangle-load shares 1/3, 2/3 o
                                            ElementKind::Q4, {1.0, 0.3}, 1.0);
     // Bottom edge (0,0)→(3,0), traction 0 at the start rising to 6: resultant 9.
     const auto f = edge_load_forces(m, {0, 0, TractionFrame::global, {0, 0}, {0, 6.0}});
-    CHECK(f[1].second == doctest::Approx(3.0));
-    CHECK(f[3].second == doctest::Approx(6.0));
+    CHECK(f[1].second == lapwing::test::approx(3.0));
+    CHECK(f[3].second == lapwing::test::approx(6.0));
 }
 
 TEST_CASE("pressure on a curved quadratic edge has the resultant p x chord x t, pushing inwards") {
@@ -62,5 +63,5 @@ TEST_CASE("pressure on a curved quadratic edge has the resultant p x chord x t, 
     // integral of the normal is the rotated chord), so although one 3-node
     // edge only approximates the half circle, the resultant is exact.
     CHECK(std::abs(sum.x()) < 1e-12);
-    CHECK(sum.y() == doctest::Approx(4.0 * 2.0 * 0.5).epsilon(1e-12));
+    CHECK(sum.y() == lapwing::test::approx(4.0 * 2.0 * 0.5, 1e-12));
 }

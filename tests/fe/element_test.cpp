@@ -5,6 +5,7 @@
 #include "fe/element_matrix.hpp"
 #include "fe/isoparametric_map.hpp"
 #include "fe/shape_functions.hpp"
+#include "support/approx.hpp"
 #include "support/fe_models.hpp"
 
 #include <Eigen/Eigenvalues>
@@ -21,14 +22,13 @@ void check_shape_properties() {
     for (int j = 0; j < n; ++j) {
         const Vector2 r = reference_node(j);
         const auto s = shape<n>(r.x(), r.y());
-        for (int i = 0; i < n; ++i)
-            CHECK(s.N(i) == doctest::Approx(i == j ? 1.0 : 0.0).epsilon(1e-15));
+        for (int i = 0; i < n; ++i) CHECK(std::abs(s.N(i) - (i == j ? 1.0 : 0.0)) < 1e-15);
     }
     // Partition of unity and its derivative, at scattered points.
     const double pts[][2] = {{0.3, -0.7}, {-0.91, 0.42}, {0.0, 0.0}, {0.77, 0.77}, {-1.0, 0.25}};
     for (const auto& p : pts) {
         const auto s = shape<n>(p[0], p[1]);
-        CHECK(s.N.sum() == doctest::Approx(1.0).epsilon(1e-14));
+        CHECK(s.N.sum() == lapwing::test::approx(1.0, 1e-14));
         CHECK(std::abs(s.dN_dxi.col(0).sum()) < 1e-14);
         CHECK(std::abs(s.dN_dxi.col(1).sum()) < 1e-14);
         // Derivatives against central differences (error O(h²) ≈ 1e-12).
@@ -70,8 +70,7 @@ TEST_CASE("det J of an affine map equals det A at every point, for every element
         for (double xi : {-1.0, -0.3, 0.5, 1.0})
             for (double eta : {-0.8, 0.0, 0.9}) {
                 // x = Aξ + b gives J = A.
-                CHECK(det_J_at(kind, c, xi, eta) ==
-                      doctest::Approx(A.determinant()).epsilon(1e-14));
+                CHECK(det_J_at(kind, c, xi, eta) == lapwing::test::approx(A.determinant(), 1e-14));
                 const auto back = inverse_map(kind, c, map_point(kind, c, xi, eta));
                 REQUIRE(back);
                 CHECK((*back - Vector2(xi, eta)).norm() < 1e-12);
@@ -136,4 +135,18 @@ TEST_CASE("a non-convex Q4 whose Gauss points are all positive is still rejected
     ElementMatrixStorage k;
     CHECK_THROWS_AS(element_stiffness(m, 0, plane_stress_D(m.materials[0]), k),
                     lapwing::AnalysisError);
+}
+
+TEST_CASE("a nearly collapsed element is reported as degenerate, with its det J against the mean") {
+    // Corner 3 pulled to within 1e-9 of corner 2: det J there is ~1e-9 of the mean.
+    const std::array<Vector2, 4> collapsed = {Vector2(0, 0), Vector2(1, 0), Vector2(1, 1),
+                                              Vector2(1 - 1e-9, 1)};
+    for (ElementKind kind : all_kinds) {
+        CAPTURE(name(kind));
+        const Model m = one_element(kind, collapsed);
+        ElementMatrixStorage k;
+        const std::string expected = "element 0 (" + std::string(name(kind)) + ") is degenerate";
+        CHECK_THROWS_WITH_AS(element_stiffness(m, 0, plane_stress_D(m.materials[0]), k),
+                             doctest::Contains(expected.c_str()), lapwing::AnalysisError);
+    }
 }

@@ -5,6 +5,7 @@
 // states.
 #include "fe/recovery.hpp"
 #include "fe/structured_grid.hpp"
+#include "support/approx.hpp"
 #include "support/fe_models.hpp"
 
 #include <cmath>
@@ -64,12 +65,12 @@ TEST_CASE("SPR with quadratic elements recovers a quadratic stress field exactly
 
 TEST_CASE("von Mises and principal stresses of known states") {
     // Uniaxial σ: von Mises σ. Pure shear τ: von Mises √3 τ, principal ±τ at 45°.
-    CHECK(von_mises({250, 0, 0}) == doctest::Approx(250));
-    CHECK(von_mises({0, 0, 100}) == doctest::Approx(100 * std::sqrt(3.0)));
+    CHECK(von_mises({250, 0, 0}) == lapwing::test::approx(250));
+    CHECK(von_mises({0, 0, 100}) == lapwing::test::approx(100 * std::sqrt(3.0)));
     const Principal p = principal({0, 0, 100});
-    CHECK(p.s1 == doctest::Approx(100));
-    CHECK(p.s2 == doctest::Approx(-100));
-    CHECK(p.angle_rad == doctest::Approx(std::atan(1.0)));
+    CHECK(p.s1 == lapwing::test::approx(100));
+    CHECK(p.s2 == lapwing::test::approx(-100));
+    CHECK(p.angle_rad == lapwing::test::approx(std::atan(1.0)));
     // Equal biaxial: von Mises σ.
-    CHECK(von_mises({120, 120, 0}) == doctest::Approx(120));
+    CHECK(von_mises({120, 120, 0}) == lapwing::test::approx(120));
 }
