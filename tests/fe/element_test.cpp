@@ -31,10 +31,11 @@ void check_shape_properties() {
         CHECK(s.N.sum() == lapwing::test::approx(1.0, 1e-14));
         CHECK(std::abs(s.dN_dxi.col(0).sum()) < 1e-14);
         CHECK(std::abs(s.dN_dxi.col(1).sum()) < 1e-14);
-        // Derivatives against central differences (error O(h²) ≈ 1e-12).
+        // Derivatives against central differences (error O(h²) ≈ 1e-12). Held as
+        // values: an Eigen expression of temporaries must not outlive them.
         const double h = 1e-6;
-        const auto sx = (shape<n>(p[0] + h, p[1]).N - shape<n>(p[0] - h, p[1]).N) / (2 * h);
-        const auto sy = (shape<n>(p[0], p[1] + h).N - shape<n>(p[0], p[1] - h).N) / (2 * h);
+        const ShapeValues<n> sx = (shape<n>(p[0] + h, p[1]).N - shape<n>(p[0] - h, p[1]).N) / (2 * h);
+        const ShapeValues<n> sy = (shape<n>(p[0], p[1] + h).N - shape<n>(p[0], p[1] - h).N) / (2 * h);
         for (int i = 0; i < n; ++i) {
             CHECK(s.dN_dxi(i, 0) == doctest::Approx(sx(i)).epsilon(1e-8).scale(1.0));
             CHECK(s.dN_dxi(i, 1) == doctest::Approx(sy(i)).epsilon(1e-8).scale(1.0));
