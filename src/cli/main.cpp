@@ -1,7 +1,6 @@
-// lapwing command line (placeholder until the subcommands land).
-#include <cstdio>
+// lapwing: the executable. Everything happens in cli::run.
+#include "cli/app.hpp"
 
-int main() {
-    std::printf("lapwing %s (%s)\n", LAPWING_VERSION, LAPWING_BUILD_ID);
-    return 0;
+int main(int argc, char** argv) {
+    return lapwing::cli::run(argc, argv);
 }

@@ -1,0 +1,41 @@
+// `lapwing validate`: resolves and checks a template, prints the summary.
+#include "cli/commands.hpp"
+#include "cli/files.hpp"
+#include "core/error.hpp"
+#include "input/load_connection.hpp"
+
+#include <ostream>
+
+namespace lapwing::cli {
+
+int report_failure(std::ostream& err) {
+    try {
+        throw;
+    } catch (const InputError& e) {
+        for (const auto& d : e.diagnostics()) err << d.format() << "\n";
+        const size_t n = e.diagnostics().size();
+        err << n << (n == 1 ? " problem" : " problems") << " found; nothing was written\n";
+        return static_cast<int>(ExitCode::bad_input);
+    } catch (const AnalysisError& e) {
+        err << "error: " << e.what() << "\n";
+        return static_cast<int>(ExitCode::bad_input);
+    } catch (const std::exception& e) {
+        err << "error: " << e.what() << "\n";
+        return static_cast<int>(ExitCode::bad_input);
+    }
+}
+
+int run_validate(const std::string& file, const std::vector<std::string>& sets, std::ostream& out,
+                 std::ostream& err) {
+    try {
+        const std::string text = read_input_file(file);
+        const auto connection = input::load_connection(text, file, sets);
+        out << input::summarize(connection);
+        out << file << ": valid\n";
+        return 0;
+    } catch (...) {
+        return report_failure(err);
+    }
+}
+
+} // namespace lapwing::cli

@@ -1,0 +1,23 @@
+// The input stage: template text → resolved, validated model::Connection.
+#pragma once
+
+#include "model/connection.hpp"
+
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace lapwing::input {
+
+// Parses `toml_text` (named `file_name` in messages), applies the
+// `KEY=VALUE` overrides in order, resolves parameters and expressions,
+// converts to N·mm·MPa and validates everything. Throws one
+// lapwing::InputError carrying every problem found.
+model::Connection load_connection(std::string_view toml_text, std::string_view file_name,
+                                  const std::vector<std::string>& set_overrides = {});
+
+// The readable summary `lapwing validate` prints: every resolved value, in
+// the user's unit system, in a stable order and number format.
+std::string summarize(const model::Connection& connection);
+
+} // namespace lapwing::input
