@@ -16,7 +16,7 @@ model::Allowable read_allowable(Table& t, const char* key, Quantity quantity) {
     if (auto v = t.number(key, quantity, Bound::positive())) {
         a.given = true;
         a.value = *v;
-        a.source = n->kind == Node::Kind::string ? n->text : show(*n);
+        a.source = n->kind == Node::Kind::string ? n->text : ""; // a plain number needs no source
     }
     return a;
 }

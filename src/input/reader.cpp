@@ -6,6 +6,7 @@
 #include "input/suggest.hpp"
 
 #include <cmath>
+#include <vector>
 #include <fmt/format.h>
 
 namespace lapwing::input {
@@ -34,14 +35,17 @@ std::string Bound::describe(std::string_view unit) const {
 
 namespace {
 
-std::vector<std::string> known_names(const Context& context) {
+// Names first; functions only when no name is close.
+std::string suggestion(const std::string& unknown, const Context& context) {
+    std::vector<std::string> names;
+    for (const auto& [name, value] : context.names) names.push_back(name);
+    if (std::string hint = did_you_mean(unknown, names); !hint.empty()) return hint;
     std::vector<std::string> out;
-    for (const auto& [name, value] : context.names) out.push_back(name);
     for (const char* f :
          {"sin", "cos", "tan", "sind", "cosd", "tand", "atan2d", "asin", "acos", "atan", "sqrt",
           "abs", "exp", "ln", "log10", "min", "max", "rint", "sign"})
         out.emplace_back(f);
-    return out;
+    return did_you_mean(unknown, out);
 }
 
 } // namespace
@@ -65,7 +69,7 @@ std::optional<double> read_number(const Node& node, const std::string& key_path,
             message += ": ";
             message += e.what();
             if (!e.unknown_name().empty()) {
-                message += did_you_mean(e.unknown_name(), known_names(context));
+                message += suggestion(e.unknown_name(), context);
                 message += "; names defined: parameters, E, nu, Fy, Fu";
             }
             context.report(node.origin, key_path, message);

@@ -23,7 +23,10 @@ int edit_distance(std::string_view a, std::string_view b) {
 }
 
 std::string closest(std::string_view word, const std::vector<std::string>& candidates) {
-    const int limit = std::max(1, static_cast<int>(word.size()) / 3);
+    // A one-letter word is one edit from every other one-letter word, so a
+    // suggestion must also keep at least one letter of the word.
+    const int size = static_cast<int>(word.size());
+    const int limit = std::min(std::max(1, size / 3), size - 1);
     std::string best;
     int best_distance = limit + 1;
     for (const auto& c : candidates) {

@@ -51,7 +51,7 @@ struct Corner {
 
 struct Cutout {
     std::string name;
-    std::vector<Point> points; // polygon, counter-clockwise
+    std::vector<Point> points; // polygon, as typed (either orientation)
 };
 
 // Outline segment i runs from corner i to corner (i+1) mod n; supports and
@@ -169,7 +169,7 @@ struct Combination {
 struct Allowable {
     bool given = false;
     double value = 0.0; // internal units (MPa, N/mm, …)
-    std::string source; // the number or expression as typed
+    std::string source; // the expression as typed; empty for a plain number
 };
 
 // Bolt bearing and tear-out. Two published forms; the user chooses one.
