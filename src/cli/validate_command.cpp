@@ -12,9 +12,7 @@ int report_failure(std::ostream& err) {
     try {
         throw;
     } catch (const InputError& e) {
-        for (const auto& d : e.diagnostics()) err << d.format() << "\n";
-        const size_t n = e.diagnostics().size();
-        err << n << (n == 1 ? " problem" : " problems") << " found; nothing was written\n";
+        err << input::format_problems(e);
         return static_cast<int>(ExitCode::bad_input);
     } catch (const AnalysisError& e) {
         err << "error: " << e.what() << "\n";

@@ -44,6 +44,26 @@ std::string_view kind_name(Node::Kind kind) {
     return "?";
 }
 
+std::string_view with_article(Node::Kind kind) {
+    switch (kind) {
+    case Node::Kind::table:
+        return "a table";
+    case Node::Kind::array:
+        return "an array";
+    case Node::Kind::string:
+        return "a text";
+    case Node::Kind::integer:
+        return "an integer";
+    case Node::Kind::floating:
+        return "a float";
+    case Node::Kind::boolean:
+        return "a boolean";
+    case Node::Kind::datetime:
+        return "a date-time";
+    }
+    return "?";
+}
+
 std::string show(const Node& node) {
     switch (node.kind) {
     case Node::Kind::table:
@@ -61,8 +81,12 @@ std::string show(const Node& node) {
         return fmt::format("\"{}\"", node.text);
     case Node::Kind::integer:
         return std::to_string(node.integer);
-    case Node::Kind::floating:
-        return fmt::format("{}", node.floating);
+    case Node::Kind::floating: {
+        // Keep the decimal point, so 2.0 does not read as the integer 2.
+        std::string text = fmt::format("{}", node.floating);
+        if (text.find_first_of(".eEn") == std::string::npos) text += ".0";
+        return text;
+    }
     case Node::Kind::boolean:
         return node.boolean ? "true" : "false";
     case Node::Kind::datetime:

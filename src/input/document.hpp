@@ -39,6 +39,8 @@ struct Node {
 
 // "table", "integer", … for messages.
 std::string_view kind_name(Node::Kind kind);
+// "an integer", "a table", … for "not a …" messages.
+std::string_view with_article(Node::Kind kind);
 
 // The value as it would be written in TOML, shortened for messages.
 std::string show(const Node& node);

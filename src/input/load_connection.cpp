@@ -61,4 +61,13 @@ model::Connection load_connection(std::string_view toml_text, std::string_view f
     return connection;
 }
 
+std::string format_problems(const InputError& error) {
+    std::string out;
+    for (const auto& d : error.diagnostics()) out += d.format() + "\n";
+    const size_t n = error.diagnostics().size();
+    out +=
+        std::to_string(n) + (n == 1 ? " problem" : " problems") + " found; nothing was written\n";
+    return out;
+}
+
 } // namespace lapwing::input

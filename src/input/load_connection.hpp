@@ -1,6 +1,7 @@
 // The input stage: template text → resolved, validated model::Connection.
 #pragma once
 
+#include "core/error.hpp"
 #include "model/connection.hpp"
 
 #include <string>
@@ -15,6 +16,10 @@ namespace lapwing::input {
 // lapwing::InputError carrying every problem found.
 model::Connection load_connection(std::string_view toml_text, std::string_view file_name,
                                   const std::vector<std::string>& set_overrides = {});
+
+// Every diagnostic of an input error, one per line (with its source line and
+// caret), then "N problems found; nothing was written".
+std::string format_problems(const InputError& error);
 
 // The readable summary `lapwing validate` prints: every resolved value, in
 // the user's unit system, in a stable order and number format.

@@ -6,8 +6,8 @@
 #include "input/suggest.hpp"
 
 #include <cmath>
-#include <vector>
 #include <fmt/format.h>
+#include <vector>
 
 namespace lapwing::input {
 
@@ -78,8 +78,8 @@ std::optional<double> read_number(const Node& node, const std::string& key_path,
         shown += fmt::format(" (= {})", value);
     } else {
         context.report(node.origin, key_path,
-                       fmt::format("= {}: must be a number, or an expression in quotes, not a {}",
-                                   shown, kind_name(node.kind)));
+                       fmt::format("= {}: must be a number, or an expression in quotes, not {}",
+                                   shown, with_article(node.kind)));
         return std::nullopt;
     }
     if (!bound.holds(value)) {
@@ -131,11 +131,10 @@ std::optional<double> Table::number(std::string_view key, Quantity quantity, Bou
                                     std::optional<double> fallback) {
     const Node* n = get(key);
     if (!n) {
-        if (!fallback)
-            missing(key,
-                    bound.describe(unit_label(quantity, context_.units)).empty()
-                        ? "a number is required"
-                        : "a number that " + bound.describe(unit_label(quantity, context_.units)));
+        if (!fallback) {
+            const std::string rule = bound.describe(unit_label(quantity, context_.units));
+            missing(key, rule.empty() ? "give a number" : fmt::format("give a number ({})", rule));
+        }
         return fallback;
     }
     return read_number(*n, path_of(key), quantity, bound, context_);
@@ -174,7 +173,7 @@ std::optional<std::string> Table::text(std::string_view key, std::optional<std::
     if (n->kind != Node::Kind::string) {
         report(
             n->origin, path_of(key),
-            fmt::format("= {}: must be a text in quotes, not a {}", show(*n), kind_name(n->kind)));
+            fmt::format("= {}: must be a text in quotes, not {}", show(*n), with_article(n->kind)));
         return std::nullopt;
     }
     return n->text;

@@ -6,20 +6,26 @@
 
 namespace lapwing::input {
 
+// Optimal string alignment distance: Levenshtein plus swaps of two
+// neighbouring letters ("wled" → "weld" is one edit), case-insensitive.
 int edit_distance(std::string_view a, std::string_view b) {
-    std::vector<int> previous(b.size() + 1), current(b.size() + 1);
-    for (size_t j = 0; j <= b.size(); ++j) previous[j] = static_cast<int>(j);
-    for (size_t i = 1; i <= a.size(); ++i) {
-        current[0] = static_cast<int>(i);
-        for (size_t j = 1; j <= b.size(); ++j) {
-            const bool same = std::tolower(static_cast<unsigned char>(a[i - 1])) ==
-                              std::tolower(static_cast<unsigned char>(b[j - 1]));
-            current[j] =
-                std::min({previous[j] + 1, current[j - 1] + 1, previous[j - 1] + (same ? 0 : 1)});
+    auto same = [](char x, char y) {
+        return std::tolower(static_cast<unsigned char>(x)) ==
+               std::tolower(static_cast<unsigned char>(y));
+    };
+    const size_t n = a.size(), m = b.size();
+    std::vector<std::vector<int>> d(n + 1, std::vector<int>(m + 1));
+    for (size_t i = 0; i <= n; ++i) d[i][0] = static_cast<int>(i);
+    for (size_t j = 0; j <= m; ++j) d[0][j] = static_cast<int>(j);
+    for (size_t i = 1; i <= n; ++i) {
+        for (size_t j = 1; j <= m; ++j) {
+            d[i][j] = std::min({d[i - 1][j] + 1, d[i][j - 1] + 1,
+                                d[i - 1][j - 1] + (same(a[i - 1], b[j - 1]) ? 0 : 1)});
+            if (i > 1 && j > 1 && same(a[i - 1], b[j - 2]) && same(a[i - 2], b[j - 1]))
+                d[i][j] = std::min(d[i][j], d[i - 2][j - 2] + 1);
         }
-        std::swap(previous, current);
     }
-    return previous[b.size()];
+    return d[n][m];
 }
 
 std::string closest(std::string_view word, const std::vector<std::string>& candidates) {

@@ -7,8 +7,8 @@
 
 namespace lapwing::input {
 
-// Levenshtein distance (insertions, deletions, substitutions each cost 1),
-// case-insensitive.
+// Edit distance: insertions, deletions, substitutions and swaps of two
+// neighbouring letters each cost 1 (optimal string alignment), case-insensitive.
 int edit_distance(std::string_view a, std::string_view b);
 
 // The closest candidate within a distance that grows with the word's length

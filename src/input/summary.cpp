@@ -51,8 +51,9 @@ void allowable(Writer& w, const char* name, const model::Allowable& a, Quantity 
         w.line(1, fmt::format("{}: not given (check not made)", name));
         return;
     }
-    w.line(1, a.source.empty() ? fmt::format("{}: {}", name, w.q(a.value, quantity))
-                               : fmt::format("{}: {} = {}", name, a.source, w.q(a.value, quantity)));
+    w.line(1, a.source.empty()
+                  ? fmt::format("{}: {}", name, w.q(a.value, quantity))
+                  : fmt::format("{}: {} = {}", name, a.source, w.q(a.value, quantity)));
 }
 
 } // namespace
@@ -60,7 +61,8 @@ void allowable(Writer& w, const char* name, const model::Allowable& a, Quantity 
 std::string summarize(const model::Connection& c) {
     Writer w(c.units);
     const auto& j = c.job;
-    if (!(j.title + j.project + j.mark + j.prepared_by + j.checked_by + j.revision + j.notes).empty())
+    if (!(j.title + j.project + j.mark + j.prepared_by + j.checked_by + j.revision + j.notes)
+             .empty())
         w.line(0, "job");
     for (const auto& [key, value] : {std::pair{"title", j.title},
                                      {"project", j.project},
