@@ -58,6 +58,11 @@ int run(int argc, char** argv) {
         "--set", sets,
         "Override one key before validating, KEY=VALUE (repeatable); the value is TOML, "
         "e.g. --set parameters.t=14 --set 'job.revision=\"B\"' --set bolt_group[0].rows=5");
+    bool resolved = false;
+    validate_cmd->add_flag(
+        "--resolved", resolved,
+        "Print the resolved template (plain numbers in the template's units) instead of "
+        "the summary");
     validate_cmd->footer(
         "Prints the summary in the template's own units and ends with \"FILE: valid\".\n"
         "Bad input: exit code 2, every problem on standard error as\n"
@@ -78,7 +83,7 @@ int run(int argc, char** argv) {
     }
 
     if (new_cmd->parsed()) return run_new(kind, output, force, std::cout, std::cerr);
-    if (validate_cmd->parsed()) return run_validate(file, sets, std::cout, std::cerr);
+    if (validate_cmd->parsed()) return run_validate(file, sets, resolved, std::cout, std::cerr);
 #ifdef LAPWING_HAS_VERIFY
     if (verify_cmd->parsed()) return run_verify(example, std::cout);
 #endif

@@ -21,9 +21,10 @@ const std::vector<TemplateKind>& template_kinds();
 int run_new(const std::string& kind, const std::string& file, bool force, std::ostream& out,
             std::ostream& err);
 
-// `lapwing validate FILE [--set KEY=VALUE ...]`: the resolved summary to `out`.
-int run_validate(const std::string& file, const std::vector<std::string>& sets, std::ostream& out,
-                 std::ostream& err);
+// `lapwing validate FILE [--set KEY=VALUE ...] [--resolved]`: the resolved
+// summary (or, with `resolved`, the resolved template) to `out`.
+int run_validate(const std::string& file, const std::vector<std::string>& sets, bool resolved,
+                 std::ostream& out, std::ostream& err);
 
 // Prints every diagnostic of a lapwing::InputError (or any exception) and
 // gives the exit code. Used by every command.

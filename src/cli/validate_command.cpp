@@ -23,13 +23,17 @@ int report_failure(std::ostream& err) {
     }
 }
 
-int run_validate(const std::string& file, const std::vector<std::string>& sets, std::ostream& out,
-                 std::ostream& err) {
+int run_validate(const std::string& file, const std::vector<std::string>& sets, bool resolved,
+                 std::ostream& out, std::ostream& err) {
     try {
         const std::string text = read_input_file(file);
         const auto connection = input::load_connection(text, file, sets);
-        out << input::summarize(connection);
-        out << file << ": valid\n";
+        if (resolved) {
+            out << input::write_resolved(connection);
+        } else {
+            out << input::summarize(connection);
+            out << file << ": valid\n";
+        }
         return 0;
     } catch (...) {
         return report_failure(err);

@@ -27,10 +27,24 @@ double atan2d(double y, double x) {
 
 } // namespace
 
+const std::vector<std::string>& builtin_names() {
+    static const std::vector<std::string> names{
+        "sin",  "cos",   "tan",   "asin",  "acos",   "atan",  "sinh", "cosh",
+        "tanh", "asinh", "acosh", "atanh", "log2",   "log10", "log",  "ln",
+        "exp",  "sqrt",  "sign",  "rint",  "abs",    "min",   "max",  "sum",
+        "avg",  "sind",  "cosd",  "tand",  "atan2d", "pi",    "_pi",  "_e"};
+    return names;
+}
+
 double evaluate(std::string_view expression, const std::map<std::string, double>& names) {
     mu::Parser parser;
     double result = 0.0;
     try {
+        // muparser 2.3's own _pi and _e are short of double precision
+        // (sin(_pi/6) is off by 1e-13): define them exactly, and plain pi too.
+        parser.DefineConst("_pi", std::numbers::pi);
+        parser.DefineConst("pi", std::numbers::pi);
+        parser.DefineConst("_e", std::numbers::e);
         parser.DefineFun("sind", sind);
         parser.DefineFun("cosd", cosd);
         parser.DefineFun("tand", tand);

@@ -6,6 +6,7 @@
 #include <stdexcept>
 #include <string>
 #include <string_view>
+#include <vector>
 
 namespace lapwing::input {
 
@@ -28,8 +29,12 @@ private:
 // Evaluates `expression` with the given names defined. Operators + - * / ^,
 // parentheses, comparison and ?: as in muparser; functions sin cos tan (radians),
 // asin acos atan, sqrt, abs, exp, ln, log10, min, max, sum, avg, rint, sign;
-// constants _pi and _e; plus sind/cosd/tand (degrees) and atan2d(y, x).
+// constants pi (also _pi) and _e; plus sind/cosd/tand (degrees) and atan2d(y, x).
 // A result that is not finite (division by zero, overflow) is an error.
 double evaluate(std::string_view expression, const std::map<std::string, double>& names);
+
+// Names the evaluator already uses (functions and constants), which
+// parameters may not take.
+const std::vector<std::string>& builtin_names();
 
 } // namespace lapwing::input

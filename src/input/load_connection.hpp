@@ -25,4 +25,9 @@ std::string format_problems(const InputError& error);
 // the user's unit system, in a stable order and number format.
 std::string summarize(const model::Connection& connection);
 
+// The resolved model as a template of plain numbers in the user's units
+// (expressions of allowables kept as typed): load_connection of this text
+// gives the same model. `lapwing validate --resolved` prints it.
+std::string write_resolved(const model::Connection& connection);
+
 } // namespace lapwing::input

@@ -1,6 +1,7 @@
 // [job], [parameters], [material] and --set overrides.
 #include "core/error.hpp"
 #include "input/expression.hpp"
+#include "input/reader.hpp"
 #include "input/sections.hpp"
 #include "input/suggest.hpp"
 
@@ -125,17 +126,29 @@ void read_parameters(Table& root, Context& context, std::map<std::string, double
         if (std::find(material_names.begin(), material_names.end(), key) != material_names.end()) {
             context.report(value.origin, path,
                            "is reserved for the material value of that name: rename the parameter");
+            context.failed.insert(key);
+            continue;
+        }
+        const auto& builtin = builtin_names();
+        if (std::find(builtin.begin(), builtin.end(), key) != builtin.end()) {
+            context.report(
+                value.origin, path,
+                "is the name of an expression function or constant: rename the parameter");
+            context.failed.insert(key);
             continue;
         }
         if (value.is_number()) {
             if (auto v = read_number(value, path, Quantity::none, Bound::any(), context))
                 context.names[key] = *v;
+            else
+                context.failed.insert(key);
         } else if (value.kind == Node::Kind::string) {
             pending.emplace_back(key, &value);
         } else {
             context.report(
                 value.origin, path,
                 fmt::format("= {}: must be a number or an expression in quotes", show(value)));
+            context.failed.insert(key);
         }
     }
     std::set<std::string> waiting;
@@ -151,8 +164,10 @@ void read_parameters(Table& root, Context& context, std::map<std::string, double
                 progress = true;
             } catch (const ExpressionError& e) {
                 if (!waiting.count(e.unknown_name())) {
-                    // A real error: report it through the common path.
+                    // A real error (or one inherited from a bad parameter, which
+                    // read_number keeps quiet): report it through the common path.
                     read_number(*value, t.path_of(key), Quantity::none, Bound::any(), context);
+                    context.failed.insert(key);
                     waiting.erase(key);
                     progress = true;
                 }
@@ -166,6 +181,7 @@ void read_parameters(Table& root, Context& context, std::map<std::string, double
         context.report(value->origin, t.path_of(key),
                        fmt::format("= {}: parameters refer to each other in a circle ({})",
                                    show(*value), cycle));
+        context.failed.insert(key);
     }
     for (const auto& [name, v] : context.names) parameters[name] = v;
 }
@@ -194,10 +210,18 @@ void read_material(Table& root, model::Material& material) {
                                    unit_label(Quantity::stress, context.units)));
     }
     // Expressions further on may use the material values, in the user's units.
-    context.names["E"] = from_internal(material.E, Quantity::stress, context.units);
-    context.names["nu"] = material.nu;
-    context.names["Fy"] = from_internal(material.Fy, Quantity::stress, context.units);
-    context.names["Fu"] = from_internal(material.Fu, Quantity::stress, context.units);
+    // A bad value is left undefined (and marked failed) so that expressions
+    // using it do not repeat the problem.
+    auto define = [&](const char* key, const std::optional<double>& v, double shown) {
+        if (v && here)
+            context.names[key] = shown;
+        else
+            context.failed.insert(key);
+    };
+    define("E", E, from_internal(material.E, Quantity::stress, context.units));
+    define("nu", nu, material.nu);
+    define("Fy", Fy, from_internal(material.Fy, Quantity::stress, context.units));
+    define("Fu", Fu, from_internal(material.Fu, Quantity::stress, context.units));
     t.finish();
 }
 

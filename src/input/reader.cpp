@@ -40,12 +40,7 @@ std::string suggestion(const std::string& unknown, const Context& context) {
     std::vector<std::string> names;
     for (const auto& [name, value] : context.names) names.push_back(name);
     if (std::string hint = did_you_mean(unknown, names); !hint.empty()) return hint;
-    std::vector<std::string> out;
-    for (const char* f :
-         {"sin", "cos", "tan", "sind", "cosd", "tand", "atan2d", "asin", "acos", "atan", "sqrt",
-          "abs", "exp", "ln", "log10", "min", "max", "rint", "sign"})
-        out.emplace_back(f);
-    return did_you_mean(unknown, out);
+    return did_you_mean(unknown, builtin_names());
 }
 
 } // namespace
@@ -64,6 +59,8 @@ std::optional<double> read_number(const Node& node, const std::string& key_path,
         try {
             value = evaluate(node.text, context.names);
         } catch (const ExpressionError& e) {
+            if (context.failed.count(e.unknown_name()))
+                return std::nullopt; // reported at its definition
             std::string message = fmt::format("= {}: expression error", shown);
             if (e.position() > 0) message += fmt::format(" at character {}", e.position());
             message += ": ";

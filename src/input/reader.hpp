@@ -23,6 +23,9 @@ struct Context {
     std::vector<Diagnostic> problems;
     UnitSystem units = UnitSystem::n_mm;
     std::map<std::string, double> names;
+    // Names whose own definition was bad (already reported): expressions
+    // using them fail quietly instead of repeating the problem.
+    std::set<std::string> failed;
 
     void report(const Origin& at, const std::string& key_path, const std::string& message);
 };

@@ -64,7 +64,7 @@ struct Plate {
 
 enum class HoleKind { standard, oversized, short_slot, long_slot };
 enum class HoleRule { metric, inch };       // which clearance table resolved the hole
-enum class SlotDirection { along, across }; // long side along or across the group axis
+enum class SlotDirection { across, along }; // long side across or along the group axis
 
 // The hole every bolt of a group sits in, resolved from its kind and the
 // stated clearance rule (or the user's explicit sizes).
