@@ -17,11 +17,11 @@ enum class ExitCode : int {
 
 // One problem in the input, located as precisely as the stage knows it.
 struct Diagnostic {
-    std::string file;     // input file name, empty when not from a file
-    int line = 0;         // 1-based, 0 when unknown
-    int column = 0;       // 1-based, 0 when unknown
-    std::string key_path; // e.g. "bolt_group[2].hole"
-    std::string message;  // e.g. "= -22: must be > 0"
+    std::string file;        // input file name, empty when not from a file
+    int line = 0;            // 1-based, 0 when unknown
+    int column = 0;          // 1-based, 0 when unknown
+    std::string key_path;    // e.g. "bolt_group[2].hole"
+    std::string message;     // e.g. "= -22: must be > 0"
     std::string source_line; // the offending line of the file, if known
 
     // "file:line:column: key_path message", followed by the source line and

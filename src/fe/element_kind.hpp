@@ -27,18 +27,25 @@ enum class ElementKind {
 constexpr int node_count(ElementKind kind) {
     switch (kind) {
     case ElementKind::Q4:
-    case ElementKind::Q4i: return 4;
-    case ElementKind::Q8: return 8;
-    case ElementKind::Q9: return 9;
+    case ElementKind::Q4i:
+        return 4;
+    case ElementKind::Q8:
+        return 8;
+    case ElementKind::Q9:
+        return 9;
     }
     return 0;
 }
 
 // Nodes on an element edge: 2 for linear elements, 3 (corner, mid-side,
 // corner) for quadratic ones.
-constexpr int edge_node_count(ElementKind kind) { return node_count(kind) == 4 ? 2 : 3; }
+constexpr int edge_node_count(ElementKind kind) {
+    return node_count(kind) == 4 ? 2 : 3;
+}
 
-constexpr bool is_quadratic(ElementKind kind) { return node_count(kind) > 4; }
+constexpr bool is_quadratic(ElementKind kind) {
+    return node_count(kind) > 4;
+}
 
 // Local node numbers along edge e (0..3), from corner e to corner e+1; for
 // quadratic elements the middle entry is the mid-side node.
@@ -50,14 +57,20 @@ constexpr std::array<int, 3> edge_nodes(ElementKind kind, int e) {
 
 // Gauss points per direction for full integration of the stiffness: exact for
 // the parallelogram stiffness (Bathe 1996, §5.5.5 on required orders).
-constexpr int gauss_order(ElementKind kind) { return node_count(kind) == 4 ? 2 : 3; }
+constexpr int gauss_order(ElementKind kind) {
+    return node_count(kind) == 4 ? 2 : 3;
+}
 
 constexpr std::string_view name(ElementKind kind) {
     switch (kind) {
-    case ElementKind::Q4: return "Q4";
-    case ElementKind::Q4i: return "Q4i";
-    case ElementKind::Q8: return "Q8";
-    case ElementKind::Q9: return "Q9";
+    case ElementKind::Q4:
+        return "Q4";
+    case ElementKind::Q4i:
+        return "Q4i";
+    case ElementKind::Q8:
+        return "Q8";
+    case ElementKind::Q9:
+        return "Q9";
     }
     return "?";
 }
@@ -67,9 +80,12 @@ constexpr std::string_view name(ElementKind kind) {
 constexpr int vtk_cell_type(ElementKind kind) {
     switch (kind) {
     case ElementKind::Q4:
-    case ElementKind::Q4i: return 9;
-    case ElementKind::Q8: return 23;
-    case ElementKind::Q9: return 28;
+    case ElementKind::Q4i:
+        return 9;
+    case ElementKind::Q8:
+        return 23;
+    case ElementKind::Q9:
+        return 28;
     }
     return 0;
 }

@@ -1,0 +1,199 @@
+// Pattern construction and value refill for the reduced stiffness.
+#include "fe/assembly.hpp"
+
+#include "fe/element_matrix.hpp"
+
+#include <algorithm>
+
+namespace lapwing::fe {
+
+long SparsePattern::find(int i, int j) const {
+    const auto begin = row.begin() + col_start[static_cast<size_t>(j)];
+    const auto end = row.begin() + col_start[static_cast<size_t>(j) + 1];
+    const auto it = std::lower_bound(begin, end, i);
+    if (it == end || *it != i) return -1;
+    return static_cast<long>(it - row.begin());
+}
+
+namespace {
+
+// The full dofs of element e, in element order u1 v1 u2 v2 ….
+int element_dofs(const Model& model, int e, std::array<int, 18>& dofs) {
+    const Element& el = model.elements[static_cast<size_t>(e)];
+    const int n = node_count(el.kind);
+    for (int i = 0; i < n; ++i) {
+        dofs[static_cast<size_t>(2 * i)] = dof_ux(el.nodes[static_cast<size_t>(i)]);
+        dofs[static_cast<size_t>(2 * i + 1)] = dof_uy(el.nodes[static_cast<size_t>(i)]);
+    }
+    return 2 * n;
+}
+
+int spring_dofs(const Spring& s, std::array<int, 18>& dofs) {
+    dofs[0] = s.dof_a;
+    if (s.dof_b < 0) return 1;
+    dofs[1] = s.dof_b;
+    return 2;
+}
+
+// Calls f(dofs, n_dofs) for every element, then every spring.
+template <typename F>
+void for_each_block(const Model& model, F&& f) {
+    std::array<int, 18> dofs{};
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e)
+        f(dofs, element_dofs(model, e, dofs));
+    for (const Spring& s : model.springs) f(dofs, spring_dofs(s, dofs));
+}
+
+} // namespace
+
+Assembler::Assembler(const Model& model, const DofMap& map) : map_(&map) {
+    const int n = map.n_unknowns();
+    // Unknowns touched by each block (element or spring).
+    std::vector<long> block_start{0};
+    std::vector<int> block_unknowns;
+    for_each_block(model, [&](const std::array<int, 18>& dofs, int n_dofs) {
+        const size_t first = block_unknowns.size();
+        for (int a = 0; a < n_dofs; ++a)
+            for (const auto& t : map.terms(dofs[static_cast<size_t>(a)]))
+                block_unknowns.push_back(t.unknown);
+        std::sort(block_unknowns.begin() + static_cast<long>(first), block_unknowns.end());
+        block_unknowns.erase(
+            std::unique(block_unknowns.begin() + static_cast<long>(first), block_unknowns.end()),
+            block_unknowns.end());
+        block_start.push_back(static_cast<long>(block_unknowns.size()));
+    });
+    const auto n_blocks = block_start.size() - 1;
+
+    // Transpose: the blocks touching each unknown.
+    std::vector<long> touch_start(static_cast<size_t>(n) + 1, 0);
+    for (int u : block_unknowns) ++touch_start[static_cast<size_t>(u) + 1];
+    for (size_t j = 0; j < static_cast<size_t>(n); ++j) touch_start[j + 1] += touch_start[j];
+    std::vector<int> touch(block_unknowns.size());
+    {
+        std::vector<long> fill(touch_start.begin(), touch_start.end() - 1);
+        for (size_t b = 0; b < n_blocks; ++b)
+            for (long p = block_start[b]; p < block_start[b + 1]; ++p)
+                touch[static_cast<size_t>(
+                    fill[static_cast<size_t>(block_unknowns[static_cast<size_t>(p)])]++)] =
+                    static_cast<int>(b);
+    }
+
+    // Column j of the lower triangle: every unknown i ≥ j sharing a block with j.
+    pattern_.n = n;
+    pattern_.col_start.assign(static_cast<size_t>(n) + 1, 0);
+    std::vector<int> marker(static_cast<size_t>(n), -1);
+    std::vector<int> column;
+    for (int j = 0; j < n; ++j) {
+        column.clear();
+        for (long p = touch_start[static_cast<size_t>(j)];
+             p < touch_start[static_cast<size_t>(j) + 1]; ++p) {
+            const auto b = static_cast<size_t>(touch[static_cast<size_t>(p)]);
+            for (long q = block_start[b]; q < block_start[b + 1]; ++q) {
+                const int i = block_unknowns[static_cast<size_t>(q)];
+                if (i >= j && marker[static_cast<size_t>(i)] != j) {
+                    marker[static_cast<size_t>(i)] = j;
+                    column.push_back(i);
+                }
+            }
+        }
+        if (marker[static_cast<size_t>(j)] != j) column.push_back(j); // keep the diagonal
+        std::sort(column.begin(), column.end());
+        pattern_.row.insert(pattern_.row.end(), column.begin(), column.end());
+        pattern_.col_start[static_cast<size_t>(j) + 1] = static_cast<int>(pattern_.row.size());
+    }
+
+    // Scatter positions for elements whose dofs are all free unknowns.
+    scatter_start_.assign(model.elements.size(), -1);
+    std::array<int, 18> dofs{};
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
+        const int n_dofs = element_dofs(model, e, dofs);
+        bool plain = true;
+        for (int a = 0; a < n_dofs && plain; ++a) plain = map.is_free(dofs[static_cast<size_t>(a)]);
+        if (!plain) continue;
+        scatter_start_[static_cast<size_t>(e)] = static_cast<long>(scatter_.size());
+        for (int b = 0; b < n_dofs; ++b)
+            for (int a = 0; a <= b; ++a) {
+                const int ua = map.unknown_of(dofs[static_cast<size_t>(a)]);
+                const int ub = map.unknown_of(dofs[static_cast<size_t>(b)]);
+                scatter_.push_back(pattern_.find(std::max(ua, ub), std::min(ua, ub)));
+            }
+    }
+}
+
+void Assembler::assemble(const Model& model, std::vector<double>& values,
+                         Eigen::VectorXd& prescribed_load) const {
+    const DofMap& map = *map_;
+    values.assign(static_cast<size_t>(pattern_.nnz()), 0.0);
+    prescribed_load = Eigen::VectorXd::Zero(map.n_unknowns());
+    std::vector<Matrix3> D(model.materials.size());
+    for (size_t m = 0; m < D.size(); ++m) D[m] = plane_stress_D(model.materials[m]);
+
+    // Generic path: K̃_ij += T_ai k_ab T_bj over all ordered (a, b) with i ≥ j,
+    // and the prescribed load −T_ai k_ab g_b.
+    auto add_generic = [&](const std::array<int, 18>& dofs, int n_dofs, const auto& k) {
+        for (int a = 0; a < n_dofs; ++a)
+            for (int b = 0; b < n_dofs; ++b) {
+                const double k_ab = k(a, b);
+                if (k_ab == 0.0) continue;
+                const int da = dofs[static_cast<size_t>(a)], db = dofs[static_cast<size_t>(b)];
+                const double g_b = map.offset(db);
+                for (const auto& ta : map.terms(da)) {
+                    if (g_b != 0.0) prescribed_load(ta.unknown) -= ta.coefficient * k_ab * g_b;
+                    for (const auto& tb : map.terms(db))
+                        if (ta.unknown >= tb.unknown)
+                            values[static_cast<size_t>(pattern_.find(ta.unknown, tb.unknown))] +=
+                                ta.coefficient * tb.coefficient * k_ab;
+                }
+            }
+    };
+
+    ElementMatrixStorage k;
+    std::array<int, 18> dofs{};
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
+        const Element& el = model.elements[static_cast<size_t>(e)];
+        const int n_dofs = element_stiffness(model, e, D[static_cast<size_t>(el.material)], k);
+        const long start = scatter_start_[static_cast<size_t>(e)];
+        if (start >= 0) {
+            const long* position = scatter_.data() + start;
+            for (int b = 0; b < n_dofs; ++b)
+                for (int a = 0; a <= b; ++a) values[static_cast<size_t>(*position++)] += k(a, b);
+        } else {
+            element_dofs(model, e, dofs);
+            add_generic(dofs, n_dofs, k);
+        }
+    }
+    for (const Spring& s : model.springs) {
+        const int n_dofs = spring_dofs(s, dofs);
+        Eigen::Matrix2d ks;
+        ks << s.k, -s.k, -s.k, s.k;
+        add_generic(dofs, n_dofs, ks);
+    }
+}
+
+Eigen::MatrixXd Assembler::internal_forces(const Model& model, const Eigen::MatrixXd& u) const {
+    Eigen::MatrixXd f = Eigen::MatrixXd::Zero(model.n_dofs(), u.cols());
+    std::vector<Matrix3> D(model.materials.size());
+    for (size_t m = 0; m < D.size(); ++m) D[m] = plane_stress_D(model.materials[m]);
+    ElementMatrixStorage k;
+    std::array<int, 18> dofs{};
+    Eigen::MatrixXd u_e, f_e;
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
+        const Element& el = model.elements[static_cast<size_t>(e)];
+        const int n_dofs = element_stiffness(model, e, D[static_cast<size_t>(el.material)], k);
+        element_dofs(model, e, dofs);
+        u_e.resize(n_dofs, u.cols());
+        for (int a = 0; a < n_dofs; ++a) u_e.row(a) = u.row(dofs[static_cast<size_t>(a)]);
+        f_e.noalias() = k.topLeftCorner(n_dofs, n_dofs) * u_e;
+        for (int a = 0; a < n_dofs; ++a) f.row(dofs[static_cast<size_t>(a)]) += f_e.row(a);
+    }
+    for (const Spring& s : model.springs) {
+        const Eigen::RowVectorXd stretch =
+            s.dof_b < 0 ? Eigen::RowVectorXd(u.row(s.dof_a))
+                        : Eigen::RowVectorXd(u.row(s.dof_a) - u.row(s.dof_b));
+        f.row(s.dof_a) += s.k * stretch;
+        if (s.dof_b >= 0) f.row(s.dof_b) -= s.k * stretch;
+    }
+    return f;
+}
+
+} // namespace lapwing::fe

@@ -1,0 +1,53 @@
+// Assembly of the reduced stiffness K̃ = Tᵀ K T (lower triangle, compressed
+// columns) with the sparsity pattern built once from the connectivity and
+// the values refilled on demand, so a new thickness, material or load case
+// never rebuilds the pattern (DESIGN: Finite elements).
+#pragma once
+
+#include "fe/constraints.hpp"
+#include "fe/model.hpp"
+
+#include <Eigen/Core>
+#include <vector>
+
+namespace lapwing::fe {
+
+// Lower triangle including the diagonal, columns sorted by row.
+struct SparsePattern {
+    int n = 0;
+    std::vector<int> col_start; // n + 1 entries
+    std::vector<int> row;       // nnz entries
+    long nnz() const { return static_cast<long>(row.size()); }
+    // Position of entry (i, j), i ≥ j, in the value array; -1 when absent.
+    long find(int i, int j) const;
+};
+
+class Assembler {
+public:
+    // Builds the pattern of the model's elements and springs under `map`.
+    Assembler(const Model& model, const DofMap& map);
+
+    const SparsePattern& pattern() const { return pattern_; }
+
+    // Values of K̃ (pattern order) and the load −Tᵀ K g that the prescribed
+    // displacements put on the unknowns. The model must have the topology the
+    // assembler was built with; coordinates, thicknesses and materials may
+    // differ.
+    void assemble(const Model& model, std::vector<double>& values,
+                  Eigen::VectorXd& prescribed_load) const;
+
+    // Internal forces K u at every dof of the model (elements and springs),
+    // for each column of `displacements` (full dofs). Reactions follow as
+    // K u − f_applied.
+    Eigen::MatrixXd internal_forces(const Model& model, const Eigen::MatrixXd& displacements) const;
+
+private:
+    const DofMap* map_;
+    SparsePattern pattern_;
+    // For an element whose dofs are all free: the value positions of its
+    // lower-triangle pairs (a ≤ b), consecutively; -1 start for the others.
+    std::vector<long> scatter_start_;
+    std::vector<long> scatter_;
+};
+
+} // namespace lapwing::fe

@@ -1,0 +1,34 @@
+// Consistent nodal forces of a traction on an element edge:
+//   f_a = ∫ N_a(s) t(s) · thickness · |dx/ds| ds
+// over the edge's own parameter s ∈ [-1, 1] (Zienkiewicz, Taylor & Zhu 2013,
+// §6.6), exact on straight edges and on curved quadratic edges to the
+// quadrature order used (5 Gauss points).
+#pragma once
+
+#include "fe/model.hpp"
+
+#include <utility>
+#include <vector>
+
+namespace lapwing::fe {
+
+enum class TractionFrame {
+    global,            // (tx, ty) in x, y
+    normal_tangential, // (σn, τ): σn along the outward normal (tension positive),
+                       // τ along the edge from its start corner to its end corner
+};
+
+// A traction on edge `edge` (0..3, from corner e to corner e+1) of element
+// `element`, varying linearly from `at_start` to `at_end` (stress units, MPa).
+struct EdgeLoad {
+    int element = -1;
+    int edge = 0;
+    TractionFrame frame = TractionFrame::global;
+    Vector2 at_start{0, 0};
+    Vector2 at_end{0, 0};
+};
+
+// (dof, force) pairs of the consistent nodal forces.
+std::vector<std::pair<int, double>> edge_load_forces(const Model& model, const EdgeLoad& load);
+
+} // namespace lapwing::fe

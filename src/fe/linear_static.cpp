@@ -1,0 +1,125 @@
+// Assemble, check supports, factorize, solve, and report the residual.
+#include "fe/linear_static.hpp"
+
+#include "core/error.hpp"
+#include "fe/restraint_check.hpp"
+
+#include <chrono>
+#include <fmt/format.h>
+
+namespace lapwing::fe {
+
+namespace {
+double seconds_since(std::chrono::steady_clock::time_point start) {
+    return std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
+}
+
+std::string describe_dof(const Model& model, int dof) {
+    if (dof >= 2 * model.n_nodes()) {
+        const int node = model.rotation_nodes[static_cast<size_t>(dof - 2 * model.n_nodes())];
+        const Vector2& x = model.nodes[static_cast<size_t>(node)];
+        return fmt::format("the rotation of node {} at ({:.4g}, {:.4g})", node, x.x(), x.y());
+    }
+    const Vector2& x = model.nodes[static_cast<size_t>(dof / 2)];
+    return fmt::format("{} of node {} at ({:.4g}, {:.4g})", dof % 2 == 0 ? "ux" : "uy", dof / 2,
+                       x.x(), x.y());
+}
+} // namespace
+
+Eigen::VectorXd applied_forces(const Model& model, const Loads& loads) {
+    Eigen::VectorXd f = Eigen::VectorXd::Zero(model.n_dofs());
+    for (const auto& [dof, value] : loads.nodal) f(dof) += value;
+    for (const EdgeLoad& load : loads.edges)
+        for (const auto& [dof, value] : edge_load_forces(model, load)) f(dof) += value;
+    return f;
+}
+
+LinearStaticProblem::LinearStaticProblem(const Model& model, Constraints constraints,
+                                         SolverOptions options)
+    : model_(&model), constraints_(std::move(constraints)), map_(model.n_dofs(), constraints_),
+      cholesky_(make_sparse_cholesky(options)) {
+    if (map_.n_unknowns() == 0)
+        throw AnalysisError("every dof of the model is constrained: nothing to solve");
+    const auto start = std::chrono::steady_clock::now();
+    assembler_ = std::make_unique<Assembler>(model, map_);
+    stats_.seconds_pattern = seconds_since(start);
+    stats_.n_dofs = model.n_dofs();
+    stats_.n_unknowns = map_.n_unknowns();
+    cholesky_->analyse(assembler_->pattern());
+    assemble_and_factorize();
+}
+
+void LinearStaticProblem::refactorize(const Model& model) {
+    model_ = &model;
+    assemble_and_factorize();
+}
+
+void LinearStaticProblem::assemble_and_factorize() {
+    const auto start = std::chrono::steady_clock::now();
+    assembler_->assemble(*model_, values_, prescribed_load_);
+    stats_.seconds_assemble = seconds_since(start);
+
+    const auto free =
+        free_rigid_motions(*model_, map_, constraints_, assembler_->pattern(), values_);
+    if (!free.empty()) {
+        std::string what;
+        if (free.size() == 3)
+            what = "it has no supports at all: it can translate in x and y and rotate";
+        else
+            for (const auto& m : free) what += (what.empty() ? "" : "; ") + m.describe();
+        throw AnalysisError("the model is not restrained against rigid-body motion: " + what);
+    }
+    try {
+        cholesky_->factorize(assembler_->pattern(), values_);
+    } catch (const NotPositiveDefinite& e) {
+        throw AnalysisError(fmt::format("the stiffness matrix is singular: part of the model is a "
+                                        "mechanism or is not connected "
+                                        "to the supports (the factorization failed at {})",
+                                        describe_dof(*model_, map_.dof_of(e.unknown()))));
+    }
+    stats_.factor = cholesky_->stats();
+    // A positive but vanishing pivot: singular in all but round-off.
+    if (stats_.factor.rcond < 1e-15)
+        throw AnalysisError(
+            fmt::format("the stiffness matrix is singular to working precision (reciprocal "
+                        "condition {:.2g}): part "
+                        "of the model is a mechanism or is not connected to the supports",
+                        stats_.factor.rcond));
+}
+
+Solution LinearStaticProblem::solve(const Loads& loads) const {
+    return solve(std::span<const Loads>(&loads, 1)).front();
+}
+
+std::vector<Solution> LinearStaticProblem::solve(std::span<const Loads> load_cases) const {
+    const auto n_cases = static_cast<int>(load_cases.size());
+    Eigen::MatrixXd f_full(model_->n_dofs(), n_cases);
+    Eigen::MatrixXd f_reduced(map_.n_unknowns(), n_cases);
+    for (int c = 0; c < n_cases; ++c) {
+        f_full.col(c) = applied_forces(*model_, load_cases[static_cast<size_t>(c)]);
+        f_reduced.col(c) = map_.restrict_to_unknowns(f_full.col(c)) + prescribed_load_;
+    }
+    const Eigen::MatrixXd u_reduced = cholesky_->solve(f_reduced);
+    const Eigen::MatrixXd residual =
+        symmetric_multiply(assembler_->pattern(), values_, u_reduced) - f_reduced;
+
+    Eigen::MatrixXd u_full(model_->n_dofs(), n_cases);
+    for (int c = 0; c < n_cases; ++c) u_full.col(c) = map_.expand(u_reduced.col(c));
+    const Eigen::MatrixXd internal = assembler_->internal_forces(*model_, u_full);
+
+    std::vector<Solution> out(static_cast<size_t>(n_cases));
+    for (int c = 0; c < n_cases; ++c) {
+        Solution& s = out[static_cast<size_t>(c)];
+        s.u = u_full.col(c);
+        s.applied = f_full.col(c);
+        s.reactions = internal.col(c) - f_full.col(c);
+        const double norm_f = f_reduced.col(c).norm();
+        s.relative_residual = norm_f > 0 ? residual.col(c).norm() / norm_f : residual.col(c).norm();
+        if (!s.u.allFinite())
+            throw AnalysisError(
+                "the solution contains values that are not finite: the model is singular");
+    }
+    return out;
+}
+
+} // namespace lapwing::fe

@@ -1,0 +1,75 @@
+// A linear static problem K u = f under constraints: assemble once, check the
+// supports, factorize once, then solve any number of load cases. A new set of
+// values on the same topology (another thickness) refills and refactorizes
+// without rebuilding the pattern or the ordering.
+#pragma once
+
+#include "fe/assembly.hpp"
+#include "fe/constraints.hpp"
+#include "fe/edge_load.hpp"
+#include "fe/model.hpp"
+#include "fe/sparse_cholesky.hpp"
+
+#include <memory>
+#include <span>
+#include <vector>
+
+namespace lapwing::fe {
+
+struct Loads {
+    std::vector<std::pair<int, double>> nodal; // (dof, force in N)
+    std::vector<EdgeLoad> edges;
+};
+
+struct Solution {
+    Eigen::VectorXd u;            // every dof of the model
+    Eigen::VectorXd reactions;    // K u − f at every dof: support and constraint forces
+    Eigen::VectorXd applied;      // f at every dof (nodal and edge loads)
+    double relative_residual = 0; // ‖K̃ũ − f̃‖ / ‖f̃‖ of the reduced system
+};
+
+struct ProblemStats {
+    int n_dofs = 0;
+    int n_unknowns = 0;
+    double seconds_pattern = 0;
+    double seconds_assemble = 0;
+    FactorStats factor;
+};
+
+class LinearStaticProblem {
+public:
+    // Keeps a reference to `model`, which must outlive the problem. Throws
+    // AnalysisError when the model is not restrained against rigid-body
+    // motion, has a mechanism, or has an inverted element.
+    LinearStaticProblem(const Model& model, Constraints constraints, SolverOptions options = {});
+
+    // Same topology, new values (coordinates, thickness, materials, springs):
+    // reassemble and refactorize, reusing the pattern and the ordering.
+    void refactorize(const Model& model);
+
+    Solution solve(const Loads& loads) const;
+    // One factorization, many right-hand sides.
+    std::vector<Solution> solve(std::span<const Loads> load_cases) const;
+
+    const Model& model() const { return *model_; }
+    const DofMap& dof_map() const { return map_; }
+    const Constraints& constraints() const { return constraints_; }
+    const ProblemStats& stats() const { return stats_; }
+
+private:
+    void assemble_and_factorize();
+
+    const Model* model_;
+    Constraints constraints_;
+    DofMap map_;
+    std::unique_ptr<Assembler> assembler_;
+    std::vector<double> values_;
+    Eigen::VectorXd prescribed_load_;
+    std::unique_ptr<SparseCholesky> cholesky_;
+    ProblemStats stats_;
+};
+
+// Applied forces of a load set on every dof of the model.
+Eigen::VectorXd applied_forces(const Model& model, const Loads& loads);
+
+} // namespace lapwing::fe

@@ -1,0 +1,54 @@
+// The data of a plane-stress finite-element model: nodes, elements,
+// materials, springs, and the dofs they carry. Plain values, no behaviour.
+#pragma once
+
+#include "fe/element_kind.hpp"
+#include "fe/material.hpp"
+#include "fe/notation.hpp"
+
+#include <array>
+#include <vector>
+
+namespace lapwing::fe {
+
+struct Element {
+    ElementKind kind = ElementKind::Q4;
+    std::array<int, 9> nodes{}; // first node_count(kind) entries used
+    int material = 0;           // index into Model::materials
+    double thickness = 1.0;     // mm
+};
+
+// A linear spring of stiffness k (N/mm) between two dofs, or from one dof to
+// the ground when dof_b < 0. Bolt shear springs are pairs of these.
+struct Spring {
+    int dof_a = -1;
+    int dof_b = -1;
+    double k = 0;
+};
+
+// Every node carries ux (dof 2i) and uy (dof 2i+1). A node listed in
+// rotation_nodes also carries an in-plane rotation θ (rigid-body reference
+// points such as member work points); its θ dof is 2·n_nodes + its position
+// in that list.
+struct Model {
+    std::vector<Vector2> nodes;
+    std::vector<Element> elements;
+    std::vector<Material> materials;
+    std::vector<Spring> springs;
+    std::vector<int> rotation_nodes;
+
+    int n_nodes() const { return static_cast<int>(nodes.size()); }
+    int n_dofs() const { return 2 * n_nodes() + static_cast<int>(rotation_nodes.size()); }
+};
+
+inline int dof_ux(int node) {
+    return 2 * node;
+}
+inline int dof_uy(int node) {
+    return 2 * node + 1;
+}
+inline int dof_rotation(const Model& model, int rotation_index) {
+    return 2 * model.n_nodes() + rotation_index;
+}
+
+} // namespace lapwing::fe

@@ -1,0 +1,249 @@
+// Stress recovery: extrapolation + averaging, SPR, and the ZZ estimate.
+#include "fe/recovery.hpp"
+
+#include "fe/isoparametric_map.hpp"
+#include "fe/quadrature.hpp"
+
+#include <Eigen/Cholesky>
+#include <algorithm>
+#include <cmath>
+
+namespace lapwing::fe {
+
+namespace {
+
+std::span<const int> nodes_of(const Element& el) {
+    return {el.nodes.data(), static_cast<size_t>(node_count(el.kind))};
+}
+
+// Evaluation weights that extrapolate values at an n×n Gauss lattice (n = 2
+// or 3, ξ fastest) to the reference point (ξ, η): the Lagrange interpolant
+// through the Gauss points, evaluated outside them.
+std::array<double, 9> extrapolation_weights(int n, double xi, double eta) {
+    std::array<double, 9> w{};
+    if (n == 2) {
+        const double s = std::sqrt(3.0); // Gauss points at ±1/√3 map to ±1
+        const ShapeAt<4> q = shape_q4(xi * s, eta * s);
+        // Q4 node order (−,−) (+,−) (+,+) (−,+) against the lattice (ξ fastest).
+        w[0] = q.N(0), w[1] = q.N(1), w[2] = q.N(3), w[3] = q.N(2);
+    } else {
+        const double s = 1.0 / std::sqrt(0.6); // Gauss points at ±√0.6 map to ±1
+        const ShapeAt<9> q = shape_q9(xi * s, eta * s);
+        for (int node = 0; node < 9; ++node) {
+            const Vector2 r = reference_node(node);
+            const int i = static_cast<int>(r.x()) + 1, j = static_cast<int>(r.y()) + 1;
+            w[static_cast<size_t>(i + 3 * j)] = q.N(node);
+        }
+    }
+    return w;
+}
+
+std::vector<std::vector<int>> elements_of_nodes(const Model& model) {
+    std::vector<std::vector<int>> out(static_cast<size_t>(model.n_nodes()));
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e)
+        for (int node : nodes_of(model.elements[static_cast<size_t>(e)]))
+            out[static_cast<size_t>(node)].push_back(e);
+    return out;
+}
+
+// Corner nodes on the boundary: on a corner-to-corner edge used by one element.
+std::vector<bool> boundary_corners(const Model& model) {
+    std::vector<std::pair<int, int>> edges;
+    for (const Element& el : model.elements)
+        for (int e = 0; e < 4; ++e) {
+            const int a = el.nodes[static_cast<size_t>(e)],
+                      b = el.nodes[static_cast<size_t>((e + 1) % 4)];
+            edges.emplace_back(std::min(a, b), std::max(a, b));
+        }
+    std::sort(edges.begin(), edges.end());
+    std::vector<bool> on_boundary(static_cast<size_t>(model.n_nodes()), false);
+    for (size_t i = 0; i < edges.size();) {
+        size_t j = i;
+        while (j < edges.size() && edges[j] == edges[i]) ++j;
+        if (j - i == 1)
+            on_boundary[static_cast<size_t>(edges[i].first)] =
+                on_boundary[static_cast<size_t>(edges[i].second)] = true;
+        i = j;
+    }
+    return on_boundary;
+}
+
+} // namespace
+
+std::vector<Stress> recover_by_averaging(const Model& model, const Eigen::VectorXd& u) {
+    std::vector<Stress> sum(static_cast<size_t>(model.n_nodes()), Stress::Zero());
+    std::vector<int> count(static_cast<size_t>(model.n_nodes()), 0);
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
+        const Element& el = model.elements[static_cast<size_t>(e)];
+        const int n = gauss_order(el.kind);
+        const SquareRule rule = gauss_square(n);
+        std::array<Stress, 9> at_gauss;
+        for (int q = 0; q < rule.n_points; ++q) {
+            const auto& p = rule.points[static_cast<size_t>(q)];
+            at_gauss[static_cast<size_t>(q)] = element_stress(model, e, u, p.xi, p.eta);
+        }
+        for (int i = 0; i < node_count(el.kind); ++i) {
+            const Vector2 r = reference_node(i);
+            const auto w = extrapolation_weights(n, r.x(), r.y());
+            Stress s = Stress::Zero();
+            for (int q = 0; q < rule.n_points; ++q)
+                s += w[static_cast<size_t>(q)] * at_gauss[static_cast<size_t>(q)];
+            sum[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])] += s;
+            ++count[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
+        }
+    }
+    for (size_t i = 0; i < sum.size(); ++i)
+        if (count[i] > 0) sum[i] /= count[i];
+    return sum;
+}
+
+SampledStresses spr_samples(const Model& model, const Eigen::VectorXd& u) {
+    return sample_stresses(model, u, 2);
+}
+
+std::vector<Stress> recover_spr(const Model& model, const SampledStresses& samples) {
+    const auto n_nodes = static_cast<size_t>(model.n_nodes());
+    const auto node_elements = elements_of_nodes(model);
+    const auto on_boundary = boundary_corners(model);
+    const int per_element = samples.points_per_element;
+
+    // Interior patches' values at nodes (own vertex, or mean over patches).
+    std::vector<Stress> own(n_nodes, Stress::Zero());
+    std::vector<bool> has_own(n_nodes, false);
+    std::vector<Stress> shared(n_nodes, Stress::Zero()), boundary_fit(n_nodes, Stress::Zero());
+    std::vector<int> n_shared(n_nodes, 0), n_boundary_fit(n_nodes, 0);
+    std::vector<bool> is_corner(n_nodes, false);
+    for (const Element& el : model.elements)
+        for (int i = 0; i < 4; ++i)
+            is_corner[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])] = true;
+
+    Eigen::MatrixXd A;
+    Eigen::MatrixXd b;
+    for (size_t v = 0; v < n_nodes; ++v) {
+        if (!is_corner[v] || node_elements[v].empty()) continue;
+        const auto& patch = node_elements[v];
+        const bool quadratic = std::any_of(patch.begin(), patch.end(), [&](int e) {
+            return is_quadratic(model.elements[static_cast<size_t>(e)].kind);
+        });
+        const int n_terms = quadratic ? 6 : 3;
+        const int n_points = static_cast<int>(patch.size()) * per_element;
+        if (n_points < n_terms + 1) continue;
+        // Local, scaled coordinates keep the normal equations well conditioned.
+        const Vector2 origin = model.nodes[v];
+        double h = 0;
+        for (int e : patch)
+            for (int q = 0; q < per_element; ++q)
+                h = std::max(
+                    h, (samples.point[static_cast<size_t>(e * per_element + q)] - origin).norm());
+        if (h == 0) continue;
+        auto basis = [&](const Vector2& x) {
+            const double X = (x.x() - origin.x()) / h, Y = (x.y() - origin.y()) / h;
+            Eigen::Matrix<double, 1, 6> row;
+            row << 1, X, Y, X * X, X * Y, Y * Y;
+            return Eigen::RowVectorXd(row.head(n_terms));
+        };
+        A.resize(n_points, n_terms);
+        b.resize(n_points, 3);
+        int r = 0;
+        for (int e : patch)
+            for (int q = 0; q < per_element; ++q, ++r) {
+                const auto k = static_cast<size_t>(e * per_element + q);
+                A.row(r) = basis(samples.point[k]);
+                b.row(r) = samples.stress[k].transpose();
+            }
+        const Eigen::MatrixXd AtA = A.transpose() * A;
+        const Eigen::LDLT<Eigen::MatrixXd> normal(AtA);
+        // Reject a patch whose points do not determine the polynomial (e.g.
+        // collinear samples): its smallest pivot collapses.
+        const Eigen::VectorXd d = normal.vectorD();
+        if (normal.info() != Eigen::Success || d.minCoeff() <= 1e-10 * d.maxCoeff()) continue;
+        const Eigen::MatrixXd coefficients = normal.solve(A.transpose() * b); // n_terms × 3
+        auto value_at = [&](int node) {
+            return Stress(
+                (basis(model.nodes[static_cast<size_t>(node)]) * coefficients).transpose());
+        };
+        if (!on_boundary[v]) {
+            own[v] = value_at(static_cast<int>(v));
+            has_own[v] = true;
+        }
+        for (int e : patch)
+            for (int node : nodes_of(model.elements[static_cast<size_t>(e)])) {
+                const auto nd = static_cast<size_t>(node);
+                if (!on_boundary[v]) {
+                    shared[nd] += value_at(node);
+                    ++n_shared[nd];
+                } else {
+                    boundary_fit[nd] += value_at(node);
+                    ++n_boundary_fit[nd];
+                }
+            }
+    }
+
+    // Fallback for nodes no patch reaches.
+    std::vector<Stress> fallback;
+    std::vector<Stress> out(n_nodes, Stress::Zero());
+    for (size_t i = 0; i < n_nodes; ++i) {
+        if (has_own[i])
+            out[i] = own[i];
+        else if (n_shared[i] > 0)
+            out[i] = shared[i] / n_shared[i];
+        else if (n_boundary_fit[i] > 0)
+            out[i] = boundary_fit[i] / n_boundary_fit[i];
+        else {
+            // Average of the sampled values of the node's elements.
+            Stress s = Stress::Zero();
+            int count = 0;
+            for (int e : node_elements[i])
+                for (int q = 0; q < per_element; ++q, ++count)
+                    s += samples.stress[static_cast<size_t>(e * per_element + q)];
+            out[i] = count > 0 ? Stress(s / count) : Stress::Zero();
+        }
+    }
+    return out;
+}
+
+ErrorEstimate zz_error_estimate(const Model& model, const Eigen::VectorXd& u,
+                                const std::vector<Stress>& recovered) {
+    ErrorEstimate out;
+    out.element_error.resize(model.elements.size());
+    double error_sq = 0, energy_sq = 0;
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
+        const Element& el = model.elements[static_cast<size_t>(e)];
+        const Matrix3 C =
+            plane_stress_compliance(model.materials[static_cast<size_t>(el.material)]);
+        const int n = node_count(el.kind);
+        std::array<Vector2, 9> coords;
+        for (int i = 0; i < n; ++i)
+            coords[static_cast<size_t>(i)] =
+                model.nodes[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
+        const std::span<const Vector2> c(coords.data(), static_cast<size_t>(n));
+        const SquareRule rule = gauss_square(gauss_order(el.kind) + 1);
+        double e_sq = 0;
+        for (int q = 0; q < rule.n_points; ++q) {
+            const auto& p = rule.points[static_cast<size_t>(q)];
+            Eigen::VectorXd N;
+            if (n == 4)
+                N = shape_q4(p.xi, p.eta).N;
+            else if (n == 8)
+                N = shape_q8(p.xi, p.eta).N;
+            else
+                N = shape_q9(p.xi, p.eta).N;
+            Stress star = Stress::Zero();
+            for (int i = 0; i < n; ++i)
+                star += N(i) * recovered[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
+            const Stress sigma = element_stress(model, e, u, p.xi, p.eta);
+            const double dv = el.thickness * det_J_at(el.kind, c, p.xi, p.eta) * p.w;
+            const Stress diff = star - sigma;
+            e_sq += diff.dot(C * diff) * dv;
+            energy_sq += sigma.dot(C * sigma) * dv;
+        }
+        out.element_error[static_cast<size_t>(e)] = std::sqrt(e_sq);
+        error_sq += e_sq;
+    }
+    out.error_norm = std::sqrt(error_sq);
+    out.energy_norm = std::sqrt(energy_sq);
+    out.relative = out.error_norm / std::sqrt(energy_sq + error_sq);
+    return out;
+}
+
+} // namespace lapwing::fe

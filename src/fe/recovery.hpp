@@ -1,0 +1,43 @@
+// Nodal stresses recovered from Gauss-point values, and the
+// Zienkiewicz–Zhu error estimate built on them (docs/theory.md §6).
+#pragma once
+
+#include "fe/model.hpp"
+#include "fe/stress.hpp"
+
+#include <vector>
+
+namespace lapwing::fe {
+
+// Extrapolation of the stiffness-rule Gauss values to the element's nodes
+// (bilinear from 2×2, biquadratic from 3×3) and averaging over the elements
+// that share a node. Simple and robust; smooths less than SPR.
+std::vector<Stress> recover_by_averaging(const Model& model, const Eigen::VectorXd& u);
+
+// The Gauss points SPR samples: 2×2 for every element type (the points where
+// the derivatives of Q4, Q8 and Q9 solutions are most accurate, Zienkiewicz &
+// Zhu 1992a).
+SampledStresses spr_samples(const Model& model, const Eigen::VectorXd& u);
+
+// Superconvergent patch recovery (Zienkiewicz & Zhu 1992, IJNME 33:1331):
+// around every interior corner node, a least-squares fit of a complete
+// polynomial (linear for 4-node, quadratic for 8/9-node elements) to the
+// sampled stresses of the elements sharing that node; the node takes its
+// patch's value, mid-side, centre and boundary nodes the mean of the patches
+// that contain them. Reproduces any stress field in the polynomial space
+// exactly. `samples` must come from spr_samples (or have its layout).
+std::vector<Stress> recover_spr(const Model& model, const SampledStresses& samples);
+
+struct ErrorEstimate {
+    std::vector<double> element_error; // ‖σ* − σ_h‖ in the energy norm, per element
+    double error_norm = 0;             // √Σ element_error²
+    double energy_norm = 0;            // ‖u_h‖ = √∫ σ_hᵀ D⁻¹ σ_h dV
+    double relative = 0;               // η = ‖e‖ / √(‖u_h‖² + ‖e‖²)
+};
+
+// Zienkiewicz & Zhu 1987 (IJNME 24:337) estimate with the recovered nodal
+// field σ* interpolated by the element shape functions.
+ErrorEstimate zz_error_estimate(const Model& model, const Eigen::VectorXd& u,
+                                const std::vector<Stress>& recovered);
+
+} // namespace lapwing::fe

@@ -1,0 +1,194 @@
+// The two factorization back ends behind one interface.
+#include "fe/sparse_cholesky.hpp"
+
+#include <Eigen/OrderingMethods>
+#include <Eigen/SparseCholesky>
+#include <chrono>
+#include <fmt/format.h>
+
+#ifdef LAPWING_HAVE_CHOLMOD
+#include <cholmod.h>
+#endif
+
+namespace lapwing::fe {
+
+namespace {
+
+double seconds_since(std::chrono::steady_clock::time_point start) {
+    return std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
+}
+
+using SparseLower = Eigen::Map<const Eigen::SparseMatrix<double, Eigen::ColMajor, int>>;
+
+SparseLower as_eigen(const SparsePattern& p, std::span<const double> values) {
+    return SparseLower(p.n, p.n, p.nnz(), p.col_start.data(), p.row.data(), values.data());
+}
+
+// ---- Eigen SimplicialLDLT ------------------------------------------------
+class EigenLdlt final : public SparseCholesky {
+public:
+    void analyse(const SparsePattern& pattern) override {
+        const auto start = std::chrono::steady_clock::now();
+        std::vector<double> zeros(static_cast<size_t>(pattern.nnz()), 0.0);
+        ldlt_.analyzePattern(as_eigen(pattern, zeros));
+        stats_.seconds_analyse = seconds_since(start);
+        stats_.nnz_A = static_cast<double>(pattern.nnz());
+    }
+    void factorize(const SparsePattern& pattern, std::span<const double> values) override {
+        const auto start = std::chrono::steady_clock::now();
+        ldlt_.factorize(as_eigen(pattern, values));
+        stats_.seconds_factorize = seconds_since(start);
+        const Eigen::VectorXd d = ldlt_.vectorD();
+        int bad = -1;
+        const double d_max = d.cwiseAbs().maxCoeff();
+        for (int i = 0; i < d.size(); ++i)
+            if (!(d(i) > 1e-14 * d_max)) {
+                bad = i;
+                break;
+            }
+        if (ldlt_.info() != Eigen::Success || bad >= 0) {
+            const int unknown = bad >= 0 ? ldlt_.permutationPinv().indices()(bad) : 0;
+            throw NotPositiveDefinite(unknown,
+                                      "the LDLᵀ factorization met a pivot that is not positive");
+        }
+        stats_.rcond = d.minCoeff() / d_max;
+        stats_.nnz_L =
+            static_cast<double>(ldlt_.matrixL().nestedExpression().nonZeros() + d.size());
+    }
+    Eigen::MatrixXd solve(const Eigen::MatrixXd& b) const override { return ldlt_.solve(b); }
+    FactorStats stats() const override { return stats_; }
+
+private:
+    Eigen::SimplicialLDLT<Eigen::SparseMatrix<double>, Eigen::Lower, Eigen::AMDOrdering<int>> ldlt_;
+    FactorStats stats_{"Eigen SimplicialLDLT", "AMD (Eigen)"};
+};
+
+#ifdef LAPWING_HAVE_CHOLMOD
+// ---- CHOLMOD supernodal LLᵀ ----------------------------------------------
+class Cholmod final : public SparseCholesky {
+public:
+    explicit Cholmod(Ordering ordering) : ordering_(ordering) {
+        cholmod_start(&common_);
+        common_.supernodal = CHOLMOD_SUPERNODAL;
+        common_.final_ll = 1;
+        common_.print = 0;
+        switch (ordering_) {
+        case Ordering::automatic:
+            break; // CHOLMOD's defaults
+        case Ordering::amd:
+            common_.nmethods = 1;
+            common_.method[0].ordering = CHOLMOD_AMD;
+            common_.postorder = 1;
+            break;
+        case Ordering::metis:
+            common_.nmethods = 1;
+            common_.method[0].ordering = CHOLMOD_METIS;
+            common_.postorder = 1;
+            break;
+        case Ordering::natural:
+            common_.nmethods = 1;
+            common_.method[0].ordering = CHOLMOD_NATURAL;
+            common_.postorder = 0;
+            break;
+        }
+    }
+    ~Cholmod() override {
+        if (factor_) cholmod_free_factor(&factor_, &common_);
+        cholmod_finish(&common_);
+    }
+    Cholmod(const Cholmod&) = delete;
+    Cholmod& operator=(const Cholmod&) = delete;
+
+    void analyse(const SparsePattern& pattern) override {
+        const auto start = std::chrono::steady_clock::now();
+        std::vector<double> zeros(static_cast<size_t>(pattern.nnz()), 0.0);
+        cholmod_sparse A = view(pattern, zeros);
+        if (factor_) cholmod_free_factor(&factor_, &common_);
+        factor_ = cholmod_analyze(&A, &common_);
+        if (!factor_)
+            throw std::runtime_error(
+                fmt::format("CHOLMOD analysis failed (status {})", common_.status));
+        stats_.seconds_analyse = seconds_since(start);
+        stats_.nnz_A = static_cast<double>(pattern.nnz());
+        static constexpr const char* names[] = {
+            "natural", "given", "AMD", "METIS", "nested dissection", "COLAMD", "postordered"};
+        const int o = factor_->ordering;
+        stats_.ordering = (o >= 0 && o <= 6) ? names[o] : "?";
+    }
+    void factorize(const SparsePattern& pattern, std::span<const double> values) override {
+        const auto start = std::chrono::steady_clock::now();
+        cholmod_sparse A = view(pattern, values);
+        cholmod_factorize(&A, factor_, &common_);
+        stats_.seconds_factorize = seconds_since(start);
+        if (common_.status == CHOLMOD_NOT_POSDEF || factor_->minor < factor_->n) {
+            const auto* perm = static_cast<const int*>(factor_->Perm);
+            const int unknown = perm ? perm[factor_->minor] : static_cast<int>(factor_->minor);
+            throw NotPositiveDefinite(
+                unknown, "the Cholesky factorization met a pivot that is not positive");
+        }
+        if (common_.status < CHOLMOD_OK)
+            throw std::runtime_error(
+                fmt::format("CHOLMOD factorization failed (status {})", common_.status));
+        stats_.flops = common_.fl;
+        stats_.nnz_L = common_.lnz;
+        stats_.rcond = cholmod_rcond(factor_, &common_);
+    }
+    Eigen::MatrixXd solve(const Eigen::MatrixXd& b) const override {
+        Eigen::MatrixXd rhs = b;
+        cholmod_dense B{};
+        B.nrow = static_cast<size_t>(rhs.rows());
+        B.ncol = static_cast<size_t>(rhs.cols());
+        B.nzmax = B.nrow * B.ncol;
+        B.d = B.nrow;
+        B.x = rhs.data();
+        B.xtype = CHOLMOD_REAL;
+        B.dtype = CHOLMOD_DOUBLE;
+        cholmod_dense* X = cholmod_solve(CHOLMOD_A, factor_, &B, &common_);
+        if (!X) throw std::runtime_error("CHOLMOD solve failed");
+        Eigen::MatrixXd x =
+            Eigen::Map<Eigen::MatrixXd>(static_cast<double*>(X->x), rhs.rows(), rhs.cols());
+        cholmod_free_dense(&X, &common_);
+        return x;
+    }
+    FactorStats stats() const override { return stats_; }
+
+private:
+    static cholmod_sparse view(const SparsePattern& p, std::span<const double> values) {
+        cholmod_sparse A{};
+        A.nrow = A.ncol = static_cast<size_t>(p.n);
+        A.nzmax = static_cast<size_t>(p.nnz());
+        A.p = const_cast<int*>(p.col_start.data());
+        A.i = const_cast<int*>(p.row.data());
+        A.x = const_cast<double*>(values.data());
+        A.stype = -1; // lower triangle stored
+        A.itype = CHOLMOD_INT;
+        A.xtype = CHOLMOD_REAL;
+        A.dtype = CHOLMOD_DOUBLE;
+        A.sorted = 1;
+        A.packed = 1;
+        return A;
+    }
+
+    Ordering ordering_;
+    mutable cholmod_common common_{};
+    cholmod_factor* factor_ = nullptr;
+    FactorStats stats_{"CHOLMOD supernodal", "?"};
+};
+#endif
+
+} // namespace
+
+std::unique_ptr<SparseCholesky> make_sparse_cholesky(const SolverOptions& options) {
+#ifdef LAPWING_HAVE_CHOLMOD
+    if (options.backend == SolverBackend::cholmod)
+        return std::make_unique<Cholmod>(options.ordering);
+#endif
+    return std::make_unique<EigenLdlt>();
+}
+
+Eigen::MatrixXd symmetric_multiply(const SparsePattern& pattern, std::span<const double> values,
+                                   const Eigen::MatrixXd& x) {
+    return as_eigen(pattern, values).selfadjointView<Eigen::Lower>() * x;
+}
+
+} // namespace lapwing::fe

@@ -1,0 +1,70 @@
+// Sparse Cholesky factorization of the reduced stiffness: CHOLMOD's
+// supernodal LLᵀ by default (Chen, Davis, Hager & Rajamanickam 2008, ACM TOMS
+// 35:22), Eigen's SimplicialLDLT as the fallback. The symbolic analysis (the
+// fill-reducing ordering) is done once per pattern and reused by every
+// numeric factorization of new values.
+#pragma once
+
+#include "fe/assembly.hpp"
+
+#include <Eigen/Core>
+#include <memory>
+#include <span>
+#include <stdexcept>
+#include <string>
+
+namespace lapwing::fe {
+
+enum class SolverBackend { cholmod, eigen_ldlt };
+enum class Ordering { automatic, amd, metis, natural };
+
+struct SolverOptions {
+#ifdef LAPWING_HAVE_CHOLMOD
+    SolverBackend backend = SolverBackend::cholmod;
+#else
+    SolverBackend backend = SolverBackend::eigen_ldlt;
+#endif
+    // automatic: CHOLMOD's own choice (AMD, then METIS when AMD's fill is poor).
+    Ordering ordering = Ordering::amd;
+};
+
+struct FactorStats {
+    std::string backend;
+    std::string ordering; // the ordering actually used
+    double nnz_A = 0;     // lower triangle of the reduced matrix
+    double nnz_L = 0;     // factor non-zeros
+    double flops = 0;     // floating-point operations of the numeric factorization
+    double rcond = 0;     // reciprocal condition estimate (min/max diag of L)²
+    double seconds_analyse = 0;
+    double seconds_factorize = 0;
+};
+
+// The factorization stopped at a pivot that is not positive: the matrix is
+// singular (unrestrained) or not positive definite.
+class NotPositiveDefinite : public std::runtime_error {
+public:
+    NotPositiveDefinite(int unknown, const std::string& what)
+        : std::runtime_error(what), unknown_(unknown) {}
+    int unknown() const { return unknown_; } // the unknown at the failed pivot
+private:
+    int unknown_;
+};
+
+class SparseCholesky {
+public:
+    virtual ~SparseCholesky() = default;
+    virtual void analyse(const SparsePattern& pattern) = 0;
+    // Throws NotPositiveDefinite.
+    virtual void factorize(const SparsePattern& pattern, std::span<const double> values) = 0;
+    // Solves for every column of b.
+    virtual Eigen::MatrixXd solve(const Eigen::MatrixXd& b) const = 0;
+    virtual FactorStats stats() const = 0;
+};
+
+std::unique_ptr<SparseCholesky> make_sparse_cholesky(const SolverOptions& options);
+
+// y = A x for the symmetric matrix stored as its lower triangle.
+Eigen::MatrixXd symmetric_multiply(const SparsePattern& pattern, std::span<const double> values,
+                                   const Eigen::MatrixXd& x);
+
+} // namespace lapwing::fe

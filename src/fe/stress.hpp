@@ -1,0 +1,37 @@
+// Stresses from a displacement solution: σ = D (B u_e + B_α α) inside an
+// element (the α term only for Q4i), sampled at Gauss points, and the
+// derived von Mises and principal values.
+#pragma once
+
+#include "fe/model.hpp"
+
+#include <Eigen/Core>
+#include <vector>
+
+namespace lapwing::fe {
+
+// Stress in element e at (ξ, η) from the full displacement vector u.
+Stress element_stress(const Model& model, int e, const Eigen::VectorXd& u, double xi, double eta);
+
+// Stresses at an n×n Gauss rule of every element.
+struct SampledStresses {
+    int points_per_element = 0;
+    std::vector<Vector2> reference; // the rule's (ξ, η), points_per_element entries
+    std::vector<Vector2> point;     // physical position, element-major
+    std::vector<Stress> stress;     // element-major
+    std::vector<double> weight;     // t · det J · w (the point's share of the volume)
+};
+SampledStresses sample_stresses(const Model& model, const Eigen::VectorXd& u,
+                                int gauss_points_per_direction);
+
+// Plane-stress von Mises: √(σx² − σxσy + σy² + 3τ²).
+double von_mises(const Stress& s);
+
+struct Principal {
+    double s1 = 0, s2 = 0; // s1 ≥ s2
+    double angle_rad = 0;  // direction of s1 from the x axis
+};
+// Mohr's circle: c ± √(((σx−σy)/2)² + τ²), tan 2θ = 2τ / (σx − σy).
+Principal principal(const Stress& s);
+
+} // namespace lapwing::fe
