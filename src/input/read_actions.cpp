@@ -279,21 +279,30 @@ void read_combinations(Table& root, model::Connection& connection) {
 // that does both (or two members) is a modelling mistake.
 void check_group_use(Table& root, const model::Connection& connection) {
     std::map<std::string, std::string> user;
-    auto claim = [&](const std::string& group, const std::string& who) {
+    // Where the i-th [[list]] entry names its bolt group (for the line number).
+    auto origin_of = [&](const char* list, size_t i) {
+        const Node* entries = root.get(list);
+        if (entries && entries->kind == Node::Kind::array && i < entries->items.size()) {
+            if (const Node* g = entries->items[i].find("bolt_group")) return g->origin;
+        }
+        return root.origin();
+    };
+    auto claim = [&](const std::string& group, const char* list, size_t i) {
         if (group.empty()) return;
+        const std::string who = fmt::format("{}[{}]", list, i);
         auto [it, fresh] = user.emplace(group, who);
         if (!fresh) {
             root.report(
-                root.origin(), who,
-                fmt::format("uses bolt group \"{}\", already used by {}: each group carries one "
-                            "member or one support",
+                origin_of(list, i), who + ".bolt_group",
+                fmt::format("= \"{}\": this group is already used by {}: each group carries "
+                            "one member or one support",
                             group, it->second));
         }
     };
     for (size_t i = 0; i < connection.members.size(); ++i)
-        claim(connection.members[i].bolt_group, fmt::format("member[{}]", i));
+        claim(connection.members[i].bolt_group, "member", i);
     for (size_t i = 0; i < connection.supports.size(); ++i)
-        claim(connection.supports[i].bolt_group, fmt::format("support[{}]", i));
+        claim(connection.supports[i].bolt_group, "support", i);
 }
 
 } // namespace

@@ -57,11 +57,11 @@ void apply_override(Node& root, const std::string& argument, Context& context) {
             context.report(origin, key, "has an empty key part: write e.g. parameters.t=14");
             return;
         }
-        walked += (walked.empty() ? "" : ".") + part;
         if (at->kind != Node::Kind::table) {
             context.report(origin, key, "cannot be set: " + walked + " is not a table");
             return;
         }
+        walked += (walked.empty() ? "" : ".") + part;
         Node* next = at->find(part);
         const bool last = dot == key.size();
         if (!next) {
