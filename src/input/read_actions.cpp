@@ -152,7 +152,7 @@ void read_supports(Table& root, model::Connection& connection) {
     for (auto& t : root.tables("support")) {
         model::Support s;
         s.name = t.text("name", "").value_or("");
-        const auto kind = t.choice("kind", {"welded", "bolted", "symmetry"}, std::nullopt);
+        const auto kind = t.choice("kind", model::support_words, std::nullopt);
         const Node* edges = t.get("edges");
         const Node* group = t.get("bolt_group");
         const Node* line = t.get("line");

@@ -152,10 +152,10 @@ void read_bolt_groups(Table& root, model::Connection& connection, PlateOrigins& 
         }
         group.diameter = g.number("diameter", Quantity::length, Bound::positive()).value_or(0.0);
 
-        const auto kind = g.choice("hole", {"standard", "oversized", "short_slot", "long_slot"}, 0);
+        const auto kind = g.choice("hole", model::hole_kind_words, 0);
         const int default_rule = connection.units == UnitSystem::kip_in ? 1 : 0;
-        const auto rule = g.choice("hole_rule", {"metric", "inch"}, default_rule);
-        const auto direction = g.choice("slot_direction", {"across", "along"}, 0);
+        const auto rule = g.choice("hole_rule", model::hole_rule_words, default_rule);
+        const auto direction = g.choice("slot_direction", model::slot_direction_words, 0);
         group.hole = model::hole_from_rule(
             static_cast<model::HoleKind>(kind.value_or(0)),
             static_cast<model::HoleRule>(rule.value_or(default_rule)), group.diameter,
@@ -210,10 +210,9 @@ void read_bolt_groups(Table& root, model::Connection& connection, PlateOrigins& 
             }
         }
         group.shear_planes = g.whole("shear_planes", 1, 4, 1).value_or(1);
-        group.tie =
-            static_cast<model::TieKind>(g.choice("tie", {"spread", "bearing"}, 0).value_or(0));
+        group.tie = static_cast<model::TieKind>(g.choice("tie", model::tie_words, 0).value_or(0));
         group.stiffness = static_cast<model::StiffnessKind>(
-            g.choice("stiffness", {"formula", "given", "rigid"}, 0).value_or(0));
+            g.choice("stiffness", model::stiffness_words, 0).value_or(0));
         const Node* spring = g.get("spring");
         if (group.stiffness == model::StiffnessKind::given) {
             group.spring =

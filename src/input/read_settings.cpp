@@ -44,7 +44,7 @@ void read_allowables(Table& root, model::Allowables& allowables) {
         auto& out = allowables.bearing;
         const model::BearingAllowable d;
         out.style = static_cast<model::BearingAllowable::Style>(
-            b.choice("style", {"factor", "partial"}, 0).value_or(0));
+            b.choice("style", model::style_words, 0).value_or(0));
         out.bearing_factor = b.number("bearing_factor", Quantity::none, factor, d.bearing_factor)
                                  .value_or(d.bearing_factor);
         out.tearout_factor = b.number("tearout_factor", Quantity::none, factor, d.tearout_factor)
@@ -64,7 +64,7 @@ void read_allowables(Table& root, model::Allowables& allowables) {
         auto& out = allowables.block_shear;
         const model::BlockShearAllowable d;
         out.style = static_cast<model::BlockShearAllowable::Style>(
-            b.choice("style", {"factor", "partial"}, 0).value_or(0));
+            b.choice("style", model::style_words, 0).value_or(0));
         out.resistance_factor =
             b.number("resistance_factor", Quantity::none, reduction, d.resistance_factor)
                 .value_or(d.resistance_factor);
@@ -94,7 +94,7 @@ void read_mesh_and_report(Table& root, model::Connection& connection) {
         Table t = root.table("mesh", false);
         auto& mesh = connection.mesh;
         mesh.element = static_cast<model::ElementChoice>(
-            t.choice("element", {"Q4", "Q4i", "Q8", "Q9"}, 2).value_or(2));
+            t.choice("element", model::element_words, 2).value_or(2));
         // Without a size, one plate thickness is a reasonable first mesh
         // for a plate whose holes are a few thicknesses across (common practice).
         const double fallback =

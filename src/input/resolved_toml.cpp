@@ -110,9 +110,6 @@ std::string write_resolved(const model::Connection& c) {
         out("\n[[plate.cutout]]\nname = {}\npoints = [{}]", quote(cut.name), points);
     }
 
-    const char* holes[] = {"standard", "oversized", "short_slot", "long_slot"};
-    const char* ties[] = {"spread", "bearing"};
-    const char* stiffness[] = {"formula", "given", "rigid"};
     for (const auto& g : c.bolt_groups) {
         out("\n[[bolt_group]]\nname = {}\norigin = {}\nangle = {}", quote(g.name),
             out.point(g.origin), number(g.angle));
@@ -123,16 +120,16 @@ std::string write_resolved(const model::Connection& c) {
         const bool slot =
             g.hole.kind == model::HoleKind::short_slot || g.hole.kind == model::HoleKind::long_slot;
         out("hole = \"{}\"\nhole_rule = \"{}\"\nslot_direction = \"{}\"",
-            holes[static_cast<int>(g.hole.kind)],
-            g.hole.rule == model::HoleRule::metric ? "metric" : "inch",
-            g.hole.direction == model::SlotDirection::along ? "along" : "across");
+            model::word(model::hole_kind_words, g.hole.kind),
+            model::word(model::hole_rule_words, g.hole.rule),
+            model::word(model::slot_direction_words, g.hole.direction));
         if (g.hole.user_given && slot)
             out("slot_width = {}\nslot_length = {}", out.q(g.hole.width, Quantity::length),
                 out.q(g.hole.length, Quantity::length));
         else if (g.hole.user_given)
             out("hole_diameter = {}", out.q(g.hole.width, Quantity::length));
         out("shear_planes = {}\ntie = \"{}\"\nstiffness = \"{}\"", g.shear_planes,
-            ties[static_cast<int>(g.tie)], stiffness[static_cast<int>(g.stiffness)]);
+            model::word(model::tie_words, g.tie), model::word(model::stiffness_words, g.stiffness));
         if (g.stiffness == model::StiffnessKind::given)
             out("spring = {}", out.q(g.spring, Quantity::force_per_length));
     }
@@ -196,21 +193,20 @@ std::string write_resolved(const model::Connection& c) {
     const auto& b = a.bearing;
     out("\n[allowables.bearing]\nstyle = \"{}\"\nbearing_factor = {}\ntearout_factor = "
         "{}\nresistance_factor = {}",
-        b.style == model::BearingAllowable::Style::factor ? "factor" : "partial",
-        number(b.bearing_factor), number(b.tearout_factor), number(b.resistance_factor));
+        model::word(model::style_words, b.style), number(b.bearing_factor),
+        number(b.tearout_factor), number(b.resistance_factor));
     out("k1 = {}\nalpha_b = {}\ngamma_M2 = {}", number(b.k1), number(b.alpha_b),
         number(b.gamma_M2));
     const auto& bs = a.block_shear;
     out("\n[allowables.block_shear]\nstyle = \"{}\"\nresistance_factor = {}\nUbs = {}\ngamma_M0 = "
         "{}\ngamma_M2 = {}",
-        bs.style == model::BlockShearAllowable::Style::factor ? "factor" : "partial",
-        number(bs.resistance_factor), number(bs.Ubs), number(bs.gamma_M0), number(bs.gamma_M2));
+        model::word(model::style_words, bs.style), number(bs.resistance_factor), number(bs.Ubs),
+        number(bs.gamma_M0), number(bs.gamma_M2));
     out("\n[allowables.whitmore_buckling]\nK = {}\nresistance_factor = {}",
         number(a.whitmore_buckling.K), number(a.whitmore_buckling.resistance_factor));
 
-    const char* elements[] = {"Q4", "Q4i", "Q8", "Q9"};
     out("\n[mesh]\nelement = \"{}\"\nsize = {}\naround_hole = {}\nnear_hole_size = {}",
-        elements[static_cast<int>(c.mesh.element)], out.q(c.mesh.size, Quantity::length),
+        model::word(model::element_words, c.mesh.element), out.q(c.mesh.size, Quantity::length),
         c.mesh.around_hole, out.q(c.mesh.near_hole_size, Quantity::length));
     for (const auto& s : c.section_lines)
         out("\n[[section]]\nname = {}\nfrom = {}\nto = {}", quote(s.name), out.point(s.from),

@@ -110,16 +110,17 @@ std::string summarize(const model::Connection& c) {
     for (const auto& g : c.bolt_groups) {
         w.line(0, fmt::format("bolt group \"{}\": {} rows x {} lines{}, {} bolts", g.name, g.rows,
                               g.lines, g.stagger ? " staggered" : "", g.rows * g.lines));
-        w.line(1, fmt::format("origin {}, axis {:.6g}°, pitch {}, gauge {}", w.point(g.origin),
-                              g.angle, w.q(g.pitch, Quantity::length),
-                              w.q(g.gauge, Quantity::length)));
+        std::string spacing;
+        if (g.rows > 1) spacing += ", pitch " + w.q(g.pitch, Quantity::length);
+        if (g.lines > 1) spacing += ", gauge " + w.q(g.gauge, Quantity::length);
+        w.line(1, fmt::format("origin {}, axis {:.6g}°{}", w.point(g.origin), g.angle, spacing));
         const bool round = g.hole.length == g.hole.width;
         const std::string hole =
             round
                 ? "diameter " + w.q(g.hole.width, Quantity::length)
                 : fmt::format("{} x {}, long side {} the axis", w.q(g.hole.width, Quantity::length),
                               w.q(g.hole.length, Quantity::length),
-                              g.hole.direction == model::SlotDirection::along ? "along" : "across");
+                              model::word(model::slot_direction_words, g.hole.direction));
         w.line(1, fmt::format("bolt diameter {}; {} hole {} ({})",
                               w.q(g.diameter, Quantity::length), model::name(g.hole.kind), hole,
                               g.hole.user_given                        ? "as given"
@@ -130,7 +131,7 @@ std::string summarize(const model::Connection& c) {
                                 : g.stiffness == model::StiffnessKind::rigid ? "rigid"
                                                                              : "given";
         w.line(1, fmt::format("shear planes {}, tie {}, stiffness {}{}", g.shear_planes,
-                              g.tie == model::TieKind::spread ? "spread" : "bearing", stiffness,
+                              model::word(model::tie_words, g.tie), stiffness,
                               g.stiffness == model::StiffnessKind::given
                                   ? fmt::format(" {}", w.q(g.spring, Quantity::force_per_length))
                                   : std::string()));
@@ -215,9 +216,8 @@ std::string summarize(const model::Connection& c) {
     w.line(1, fmt::format("Whitmore buckling: K {:.6g}, resistance factor {:.6g}",
                           a.whitmore_buckling.K, a.whitmore_buckling.resistance_factor));
 
-    const char* elements[] = {"Q4", "Q4i", "Q8", "Q9"};
     w.line(0, fmt::format("mesh: {} elements, size {}, {} around each hole, {} next to holes",
-                          elements[static_cast<int>(c.mesh.element)],
+                          model::word(model::element_words, c.mesh.element),
                           w.q(c.mesh.size, Quantity::length), c.mesh.around_hole,
                           w.q(c.mesh.near_hole_size, Quantity::length)));
     for (const auto& s : c.section_lines)

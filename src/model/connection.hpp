@@ -258,6 +258,24 @@ struct Connection {
     std::map<std::string, double> parameters; // resolved, in the user's units
 };
 
+// The template's words for each enumeration, in enumeration order: the
+// reader, the summary and the resolved writer all use these lists.
+inline const std::vector<std::string> hole_kind_words{"standard", "oversized", "short_slot",
+                                                      "long_slot"};
+inline const std::vector<std::string> hole_rule_words{"metric", "inch"};
+inline const std::vector<std::string> slot_direction_words{"across", "along"};
+inline const std::vector<std::string> tie_words{"spread", "bearing"};
+inline const std::vector<std::string> stiffness_words{"formula", "given", "rigid"};
+inline const std::vector<std::string> support_words{"welded", "bolted", "symmetry"};
+inline const std::vector<std::string> style_words{"factor", "partial"};
+inline const std::vector<std::string> element_words{"Q4", "Q4i", "Q8", "Q9"};
+
+// The word of one enumerator, e.g. word(tie_words, TieKind::bearing) == "bearing".
+template <typename Enum>
+const std::string& word(const std::vector<std::string>& words, Enum value) {
+    return words.at(static_cast<size_t>(value));
+}
+
 const BoltGroup* find_bolt_group(const Connection& connection, const std::string& name);
 
 } // namespace lapwing::model
