@@ -37,19 +37,22 @@ std::string read_input_file(const fs::path& path) {
 
 void write_atomically(const fs::path& path, const std::string& content) {
     const fs::path folder = path.has_parent_path() ? path.parent_path() : fs::path(".");
+    if (std::error_code ec; !fs::is_directory(folder, ec)) {
+        throw std::runtime_error("cannot write " + path.string() + ": there is no folder " +
+                                 folder.string());
+    }
     const fs::path temporary =
         folder / ("." + path.filename().string() + ".tmp-" + std::to_string(::getpid()));
     {
         std::ofstream out(temporary, std::ios::binary | std::ios::trunc);
         if (!out)
-            throw std::runtime_error("cannot write " + temporary.string() + ": " +
-                                     std::strerror(errno));
+            throw std::runtime_error("cannot write " + path.string() + ": " + std::strerror(errno));
         out << content;
         out.close();
         if (!out) {
             std::error_code ignored;
             fs::remove(temporary, ignored);
-            throw std::runtime_error("cannot write " + temporary.string());
+            throw std::runtime_error("cannot write " + path.string());
         }
     }
     std::error_code ec;
