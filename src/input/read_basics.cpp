@@ -33,7 +33,14 @@ void apply_override(Node& root, const std::string& argument, Context& context) {
         context.report(origin, "", "must be KEY=VALUE, e.g. --set parameters.t=14");
         return;
     }
-    const std::string key = argument.substr(0, equals);
+    // Spaces around the key and the value ("t = 14" typed in quotes) do not count.
+    auto trim = [](std::string text) {
+        const auto first = text.find_first_not_of(" \t");
+        if (first == std::string::npos) return std::string();
+        return text.substr(first, text.find_last_not_of(" \t") - first + 1);
+    };
+    const std::string key = trim(argument.substr(0, equals));
+    const std::string value = trim(argument.substr(equals + 1));
     Node* at = &root;
     std::string walked;
     size_t start = 0;
@@ -88,7 +95,7 @@ void apply_override(Node& root, const std::string& argument, Context& context) {
             walked += fmt::format("[{}]", *index);
         }
         if (last) {
-            *next = parse_override_value(argument.substr(equals + 1), origin);
+            *next = parse_override_value(value, origin);
             return;
         }
         at = next;

@@ -127,6 +127,10 @@ TEST_CASE("--set overrides a parameter, a plain key and an entry of a list") {
     CHECK(c.bolt_groups.at(0).pitch == 60.0);
     CHECK(c.job.title == "Splice S4"); // not TOML, so taken as plain text
     CHECK(c.material.Fy == doctest::Approx(343.0).epsilon(1e-15));
+    // Spaces around '=' are allowed when the argument is quoted as one word.
+    const auto spaced =
+        load_connection(joint("N-mm", metric_numbers), "j.toml", {"parameters.t = 16"});
+    CHECK(spaced.plate.thickness == 16.0);
 }
 
 TEST_CASE("holes follow the stated clearance rule unless given explicitly") {
