@@ -165,3 +165,43 @@ TEST_CASE("the summary shows values in the user's units") {
     CHECK(s.find("peak von Mises: 0.9*Fy = 45 ksi") != std::string::npos);
     CHECK(s.find("dead: axial 100 kip, shear 0 kip, moment 50 kip·in") != std::string::npos);
 }
+
+TEST_CASE("edge loads, symmetry lines and welded members read and round-trip") {
+    const std::string text = joint("kN-mm", metric_numbers) + R"(
+[[member]]
+name = "stiffener"
+welded_edges = [2]
+work_point = [150, 120]
+angle = 90
+forces.dead = { axial = -20 }
+
+[[support]]
+kind = "symmetry"
+line = [[0, 0], [0, 120]]
+
+[[edge_load]]
+edge = "weld"
+load_case = "dead"
+total = [0, -12]
+
+[[edge_load]]
+edge = 1
+load_case = "dead"
+traction = [0.5, 0]
+)";
+    const auto c = load_connection(text, "j.toml");
+    REQUIRE(c.members.size() == 2);
+    CHECK(c.members[1].welded_edges == std::vector<int>{2});
+    CHECK(c.members[1].forces.at("dead").axial == -20000.0); // kN → N
+    REQUIRE(c.supports.size() == 1);
+    CHECK(c.supports[0].kind == lapwing::model::SupportKind::symmetry);
+    CHECK(c.supports[0].line_to == lapwing::model::Point{0.0, 120.0});
+    REQUIRE(c.edge_loads.size() == 2);
+    CHECK(c.edge_loads[0].edge == 0); // "weld" names segment 0
+    CHECK(c.edge_loads[0].total);
+    CHECK(c.edge_loads[0].fy == -12000.0); // 12 kN
+    CHECK(c.edge_loads[1].fx == 500.0);    // 0.5 kN/mm = 500 N/mm
+    const std::string summary = lapwing::input::summarize(c);
+    const auto again = load_connection(lapwing::input::write_resolved(c), "resolved.toml");
+    CHECK(lapwing::input::summarize(again) == summary);
+}
