@@ -38,6 +38,16 @@ bool check_reference(const Node& node, const std::string& path,
     return false;
 }
 
+// A table key that must be a load case name (member forces, combination factors).
+bool names_load_case(const std::string& name, const Node& node, const std::string& path,
+                     const std::vector<std::string>& cases, Context& context) {
+    if (std::find(cases.begin(), cases.end(), name) != cases.end()) return true;
+    context.report(node.origin, path,
+                   fmt::format("names no load case{}; defined: {}", did_you_mean(name, cases),
+                               cases.empty() ? "none" : one_of(cases)));
+    return false;
+}
+
 std::vector<int> read_edges(Table& t, const char* key, const model::Plate& plate) {
     std::vector<int> edges;
     const Node* n = t.get(key);
@@ -117,13 +127,7 @@ void read_members(Table& root, model::Connection& connection) {
             for (const auto& [name, node] : t.get("forces")->entries) {
                 const std::string path = forces.path_of(name);
                 forces.get(name);
-                if (std::find(cases.begin(), cases.end(), name) == cases.end()) {
-                    t.report(node.origin, path,
-                             fmt::format("names no load case{}; defined: {}",
-                                         did_you_mean(name, cases),
-                                         cases.empty() ? "none" : one_of(cases)));
-                    continue;
-                }
+                if (!names_load_case(name, node, path, cases, t.context())) continue;
                 if (node.kind != Node::Kind::table) {
                     t.report(
                         node.origin, path,
@@ -256,13 +260,7 @@ void read_combinations(Table& root, model::Connection& connection) {
         if (f.present()) {
             for (const auto& [name, node] : t.get("factors")->entries) {
                 f.get(name);
-                if (std::find(cases.begin(), cases.end(), name) == cases.end()) {
-                    t.report(node.origin, f.path_of(name),
-                             fmt::format("names no load case{}; defined: {}",
-                                         did_you_mean(name, cases),
-                                         cases.empty() ? "none" : one_of(cases)));
-                    continue;
-                }
+                if (!names_load_case(name, node, f.path_of(name), cases, t.context())) continue;
                 if (auto v = read_number(node, f.path_of(name), Quantity::none, Bound::any(),
                                          t.context()))
                     c.factors[name] = *v;

@@ -25,17 +25,8 @@ model::Allowable read_allowable(Table& t, const char* key, Quantity quantity) {
 
 void read_allowables(Table& root, model::Allowables& allowables) {
     Table t = root.table("allowables", true);
-    auto stress = [&](const char* key) { return read_allowable(t, key, Quantity::stress); };
-    allowables.peak_von_mises = stress("peak_von_mises");
-    allowables.section_membrane = stress("section_membrane");
-    allowables.membrane_plus_bending = stress("membrane_plus_bending");
-    allowables.section_shear = stress("section_shear");
-    allowables.whitmore_yield = stress("whitmore_yield");
-    allowables.gross_tension = stress("gross_tension");
-    allowables.net_tension = stress("net_tension");
-    allowables.gross_shear = stress("gross_shear");
-    allowables.net_shear = stress("net_shear");
-    allowables.weld_per_length = read_allowable(t, "weld_per_length", Quantity::force_per_length);
+    for (const auto& entry : model::allowable_entries)
+        allowables.*entry.member = read_allowable(t, entry.key, entry.quantity);
 
     const Bound factor = Bound::open_range(0.0, 1.0e3);
     const Bound reduction = Bound::range(0.0, 1.0); // resistance factors φ

@@ -180,16 +180,8 @@ std::string write_resolved(const model::Connection& c) {
 
     const auto& a = c.allowables;
     out("\n[allowables]");
-    allowable(out, "peak_von_mises", a.peak_von_mises, Quantity::stress);
-    allowable(out, "section_membrane", a.section_membrane, Quantity::stress);
-    allowable(out, "membrane_plus_bending", a.membrane_plus_bending, Quantity::stress);
-    allowable(out, "section_shear", a.section_shear, Quantity::stress);
-    allowable(out, "whitmore_yield", a.whitmore_yield, Quantity::stress);
-    allowable(out, "gross_tension", a.gross_tension, Quantity::stress);
-    allowable(out, "net_tension", a.net_tension, Quantity::stress);
-    allowable(out, "gross_shear", a.gross_shear, Quantity::stress);
-    allowable(out, "net_shear", a.net_shear, Quantity::stress);
-    allowable(out, "weld_per_length", a.weld_per_length, Quantity::force_per_length);
+    for (const auto& entry : model::allowable_entries)
+        allowable(out, entry.key, a.*entry.member, entry.quantity);
     const auto& b = a.bearing;
     out("\n[allowables.bearing]\nstyle = \"{}\"\nbearing_factor = {}\ntearout_factor = "
         "{}\nresistance_factor = {}",

@@ -183,16 +183,8 @@ std::string summarize(const model::Connection& c) {
 
     const auto& a = c.allowables;
     w.line(0, "allowables");
-    allowable(w, "peak von Mises", a.peak_von_mises, Quantity::stress);
-    allowable(w, "section membrane", a.section_membrane, Quantity::stress);
-    allowable(w, "membrane + bending", a.membrane_plus_bending, Quantity::stress);
-    allowable(w, "section average shear", a.section_shear, Quantity::stress);
-    allowable(w, "Whitmore yielding", a.whitmore_yield, Quantity::stress);
-    allowable(w, "gross section tension", a.gross_tension, Quantity::stress);
-    allowable(w, "net section tension", a.net_tension, Quantity::stress);
-    allowable(w, "gross section shear", a.gross_shear, Quantity::stress);
-    allowable(w, "net section shear", a.net_shear, Quantity::stress);
-    allowable(w, "weld force per length", a.weld_per_length, Quantity::force_per_length);
+    for (const auto& entry : model::allowable_entries)
+        allowable(w, entry.label, a.*entry.member, entry.quantity);
     const auto& b = a.bearing;
     if (b.style == model::BearingAllowable::Style::factor)
         w.line(1, fmt::format(

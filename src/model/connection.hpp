@@ -220,6 +220,30 @@ struct Allowables {
     WhitmoreBuckling whitmore_buckling;
 };
 
+// The capacities entered as one number or expression each, with their
+// template key, their words in the summary and what they measure; the
+// reader, the summary and the resolved writer all walk this table.
+struct AllowableEntry {
+    const char* key;
+    const char* label;
+    Allowable Allowables::*member;
+    Quantity quantity;
+};
+inline constexpr AllowableEntry allowable_entries[] = {
+    {"peak_von_mises", "peak von Mises", &Allowables::peak_von_mises, Quantity::stress},
+    {"section_membrane", "section membrane", &Allowables::section_membrane, Quantity::stress},
+    {"membrane_plus_bending", "membrane + bending", &Allowables::membrane_plus_bending,
+     Quantity::stress},
+    {"section_shear", "section average shear", &Allowables::section_shear, Quantity::stress},
+    {"whitmore_yield", "Whitmore yielding", &Allowables::whitmore_yield, Quantity::stress},
+    {"gross_tension", "gross section tension", &Allowables::gross_tension, Quantity::stress},
+    {"net_tension", "net section tension", &Allowables::net_tension, Quantity::stress},
+    {"gross_shear", "gross section shear", &Allowables::gross_shear, Quantity::stress},
+    {"net_shear", "net section shear", &Allowables::net_shear, Quantity::stress},
+    {"weld_per_length", "weld force per length", &Allowables::weld_per_length,
+     Quantity::force_per_length},
+};
+
 enum class ElementChoice { Q4, Q4i, Q8, Q9 }; // same names as fe::ElementKind
 
 struct MeshControls {
