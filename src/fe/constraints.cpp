@@ -46,7 +46,7 @@ DofMap::DofMap(int n_dofs, const Constraints& constraints) {
             throw AnalysisError(
                 fmt::format("{} names dof {}, but the model has {} dofs", what, dof, n_dofs));
         if (role[static_cast<size_t>(dof)] != Role::free)
-            throw AnalysisError(fmt::format("dof {} (node {}) is constrained twice", dof, dof / 2));
+            throw AnalysisError(fmt::format("dof {} is constrained twice", dof));
         role[static_cast<size_t>(dof)] = r;
     };
     for (const auto& p : constraints.prescribed) {
@@ -77,8 +77,8 @@ DofMap::DofMap(int n_dofs, const Constraints& constraints) {
         const auto d = static_cast<size_t>(dof);
         if (state[d] == 2) return expansion[d];
         if (state[d] == 1)
-            throw AnalysisError(fmt::format(
-                "the linear constraints form a cycle through dof {} (node {})", dof, dof / 2));
+            throw AnalysisError(
+                fmt::format("the linear constraints form a cycle through dof {}", dof));
         state[d] = 1;
         Expansion e;
         if (role[d] == Role::free) {

@@ -1,8 +1,10 @@
 // Consistent nodal forces of a traction on an element edge:
 //   f_a = ∫ N_a(s) t(s) · thickness · |dx/ds| ds
 // over the edge's own parameter s ∈ [-1, 1] (Zienkiewicz, Taylor & Zhu 2013,
-// §6.6), exact on straight edges and on curved quadratic edges to the
-// quadrature order used (5 Gauss points).
+// §6.6) by 5 Gauss points: exact on straight edges, and on curved quadratic
+// edges in the normal/tangential frame (where |dx/ds| cancels against the
+// normal); a global-frame traction on a curved edge is integrated to the
+// rule's accuracy (|dx/ds| is not polynomial there).
 #pragma once
 
 #include "fe/model.hpp"

@@ -9,32 +9,54 @@
 #include "fe/strain_operator.hpp"
 
 #include <Eigen/LU>
+#include <algorithm>
 #include <array>
+#include <cmath>
 #include <fmt/format.h>
 
 namespace lapwing::fe {
 
 namespace {
 
+// An element whose det J falls below this fraction of its mean somewhere is
+// degenerate (collapsed corner, sliver) even if not inverted.
+constexpr double min_det_J_fraction = 1e-6;
+
 // Throws the detailed error (element, point, value) for an element whose map
 // is not positive somewhere.
 template <int n>
-[[noreturn]] void report_bad_map(const NodeCoords<n>& X, int element_id) {
+constexpr ElementKind standard_kind() {
+    return n == 4 ? ElementKind::Q4 : n == 8 ? ElementKind::Q8 : ElementKind::Q9;
+}
+
+// Full det J check of an element (reference nodes and Gauss points).
+template <int n>
+void check_map(const NodeCoords<n>& X, ElementKind kind, int element_id) {
     std::array<Vector2, 9> coords;
     for (int i = 0; i < n; ++i) coords[static_cast<size_t>(i)] = X.row(i).transpose();
-    const ElementKind kind = n == 4 ? ElementKind::Q4 : n == 8 ? ElementKind::Q8 : ElementKind::Q9;
-    check_element_map(kind, std::span<const Vector2>(coords.data(), n), element_id);
+    check_element_map(kind, std::span<const Vector2>(coords.data(), n), element_id,
+                      min_det_J_fraction);
+}
+
+template <int n>
+[[noreturn]] void report_bad_map(const NodeCoords<n>& X, int element_id,
+                                 ElementKind kind = standard_kind<n>()) {
+    check_map<n>(X, kind, element_id);
     throw AnalysisError(fmt::format("element {} has a non-positive Jacobian", element_id));
 }
 
 // The Gauss points can all be positive while a reflex corner of a Q4 is not;
 // det J of a Q4 is linear in ξ and η, so its corner values decide. At corner
-// i it is ¼ of the cross product of the two edges meeting there.
+// i it is ¼ of the cross product of the two edges meeting there, and the
+// mean det J is ¼ of the area.
 bool q4_corners_positive(const NodeCoords<4>& X) {
+    double area = 0;
+    for (int i = 0; i < 4; ++i) area += X(i, 0) * X((i + 1) % 4, 1) - X((i + 1) % 4, 0) * X(i, 1);
+    area *= 0.5;
     for (int i = 0; i < 4; ++i) {
         const Vector2 a = X.row((i + 1) % 4) - X.row(i);
         const Vector2 b = X.row((i + 3) % 4) - X.row(i);
-        if (a.x() * b.y() - a.y() * b.x() <= 0) return false;
+        if (a.x() * b.y() - a.y() * b.x() <= min_det_J_fraction * area) return false;
     }
     return true;
 }
@@ -46,16 +68,24 @@ ElementMatrix<n> stiffness(const NodeCoords<n>& X, const Matrix3& D, double t, i
     const auto& ref = ReferenceElement<n>::get();
     if constexpr (n == 4) {
         if (!q4_corners_positive(X)) report_bad_map<n>(X, element_id);
+    } else {
+        // det J of a quadratic element is not linear: its extremes can sit at
+        // corners or mid-sides between the Gauss points, so sample them.
+        check_map<n>(X, standard_kind<n>(), element_id);
     }
     ElementMatrix<n> k = ElementMatrix<n>::Zero();
+    double min_det_J = INFINITY, area = 0;
     for (int q = 0; q < ref.rule.n_points; ++q) {
         const auto& s = ref.at_points[static_cast<size_t>(q)];
         const Jacobian J = jacobian<n>(X, s.dN_dxi);
         if (J.det() <= 0) report_bad_map<n>(X, element_id);
+        min_det_J = std::min(min_det_J, J.det());
+        area += J.det() * ref.rule.points[static_cast<size_t>(q)].w;
         const StrainOperator<n> B = strain_operator<n>(physical_derivatives<n>(s.dN_dxi, J));
         const double w = ref.rule.points[static_cast<size_t>(q)].w;
         k.noalias() += B.transpose() * (D * B) * (t * J.det() * w);
     }
+    if (min_det_J < min_det_J_fraction * area / 4.0) report_bad_map<n>(X, element_id);
     return k;
 }
 
@@ -76,7 +106,7 @@ Eigen::Matrix<double, 3, 4> incompatible_strain_operator(const NodeCoords<4>& X,
 }
 
 IncompatibleQ4 stiffness_q4i(const NodeCoords<4>& X, const Matrix3& D, double t, int element_id) {
-    if (!q4_corners_positive(X)) report_bad_map<4>(X, element_id);
+    if (!q4_corners_positive(X)) report_bad_map<4>(X, element_id, ElementKind::Q4i);
     const auto& ref = ReferenceElement<4>::get();
     const Jacobian J0 = jacobian<4>(X, shape_q4(0, 0).dN_dxi);
     ElementMatrix<4> k_uu = ElementMatrix<4>::Zero();
@@ -86,7 +116,7 @@ IncompatibleQ4 stiffness_q4i(const NodeCoords<4>& X, const Matrix3& D, double t,
         const auto& p = ref.rule.points[static_cast<size_t>(q)];
         const auto& s = ref.at_points[static_cast<size_t>(q)];
         const Jacobian J = jacobian<4>(X, s.dN_dxi);
-        if (J.det() <= 0) report_bad_map<4>(X, element_id);
+        if (J.det() <= 0) report_bad_map<4>(X, element_id, ElementKind::Q4i);
         const StrainOperator<4> B = strain_operator<4>(physical_derivatives<4>(s.dN_dxi, J));
         Eigen::Matrix<double, 2, 2> dP_dxi;
         dP_dxi << -2 * p.xi, 0, //

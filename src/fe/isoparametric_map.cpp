@@ -103,7 +103,7 @@ void check_element_map(ElementKind kind, std::span<const Vector2> coords, int el
                 "element {} ({}) is {}: det J = {:.4g} at (xi, eta) = ({:.3f}, {:.3f}), "
                 "point ({:.4g}, {:.4g}); the element's mean det J is {:.4g}. Check that its nodes "
                 "run counter-clockwise and that it is not folded or collapsed",
-                element_id, name(kind), s.det_J <= 0 ? "inverted" : "degenerate", s.det_J, s.xi,
+                element_id, name(kind), s.det_J < 0 ? "inverted" : "degenerate", s.det_J, s.xi,
                 s.eta, x.x(), x.y(), mean));
         }
     }

@@ -38,14 +38,20 @@ struct ProblemStats {
 
 class LinearStaticProblem {
 public:
-    // Keeps a reference to `model`, which must outlive the problem. Throws
+    // Keeps a reference to `model`, which must outlive the problem (and
+    // refers to its own members, so it is neither copied nor moved). Throws
     // AnalysisError when the model is not restrained against rigid-body
     // motion, has a mechanism, or has an inverted element.
     LinearStaticProblem(const Model& model, Constraints constraints, SolverOptions options = {});
 
     // Same topology, new values (coordinates, thickness, materials, springs):
     // reassemble and refactorize, reusing the pattern and the ordering.
+    // The constraints are kept as given: a rigid link's coefficients stay
+    // those of the coordinates at construction.
     void refactorize(const Model& model);
+
+    LinearStaticProblem(const LinearStaticProblem&) = delete;
+    LinearStaticProblem& operator=(const LinearStaticProblem&) = delete;
 
     Solution solve(const Loads& loads) const;
     // One factorization, many right-hand sides.

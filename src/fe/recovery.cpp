@@ -242,7 +242,8 @@ ErrorEstimate zz_error_estimate(const Model& model, const Eigen::VectorXd& u,
     }
     out.error_norm = std::sqrt(error_sq);
     out.energy_norm = std::sqrt(energy_sq);
-    out.relative = out.error_norm / std::sqrt(energy_sq + error_sq);
+    const double total = std::sqrt(energy_sq + error_sq);
+    out.relative = total > 0 ? out.error_norm / total : 0.0; // no stress, no error
     return out;
 }
 

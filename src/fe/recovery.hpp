@@ -1,5 +1,5 @@
 // Nodal stresses recovered from Gauss-point values, and the
-// Zienkiewicz–Zhu error estimate built on them (docs/theory.md §6).
+// Zienkiewicz–Zhu error estimate built on them (docs/theory.md §8).
 #pragma once
 
 #include "fe/model.hpp"
@@ -14,9 +14,11 @@ namespace lapwing::fe {
 // that share a node. Simple and robust; smooths less than SPR.
 std::vector<Stress> recover_by_averaging(const Model& model, const Eigen::VectorXd& u);
 
-// The Gauss points SPR samples: 2×2 for every element type (the points where
-// the derivatives of Q4, Q8 and Q9 solutions are most accurate, Zienkiewicz &
-// Zhu 1992a).
+// The Gauss points SPR samples: 2×2 for every element type. They are the
+// superconvergent points of the quadratic elements (Zienkiewicz & Zhu 1992a);
+// for the bilinear element the optimal point is the centre (Barlow 1976,
+// IJNME 10:243), but 2×2 sampling with a linear fit keeps boundary patches
+// determined and gives effectivity indices near 1 in tests/verification.
 SampledStresses spr_samples(const Model& model, const Eigen::VectorXd& u);
 
 // Superconvergent patch recovery (Zienkiewicz & Zhu 1992, IJNME 33:1331):

@@ -1,7 +1,7 @@
 // Detects rigid-body motions the supports leave free, before factorizing,
 // so an unrestrained model is reported in words ("free to translate along
-// x", "free to rotate about (120, 40)") and never reaches the solver as a
-// singular matrix.
+// (1.000, 0.000)", "free to rotate about (120, 40)") and never reaches the
+// solver as a singular matrix.
 #pragma once
 
 #include "fe/assembly.hpp"

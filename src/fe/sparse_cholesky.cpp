@@ -39,10 +39,12 @@ public:
         ldlt_.factorize(as_eigen(pattern, values));
         stats_.seconds_factorize = seconds_since(start);
         const Eigen::VectorXd d = ldlt_.vectorD();
+        // A pivot that is not positive fails as in CHOLMOD; a positive but
+        // vanishing one is left to the caller's reciprocal-condition guard.
         int bad = -1;
         const double d_max = d.cwiseAbs().maxCoeff();
         for (int i = 0; i < d.size(); ++i)
-            if (!(d(i) > 1e-14 * d_max)) {
+            if (!(d(i) > 0)) {
                 bad = i;
                 break;
             }
@@ -101,8 +103,10 @@ public:
 
     void analyse(const SparsePattern& pattern) override {
         const auto start = std::chrono::steady_clock::now();
-        std::vector<double> zeros(static_cast<size_t>(pattern.nnz()), 0.0);
-        cholmod_sparse A = view(pattern, zeros);
+        // The ordering needs the structure only: a pattern matrix, rather
+        // than an nnz-long array of zeros allocated (and faulted in) for it.
+        cholmod_sparse A = view(pattern, {});
+        A.xtype = CHOLMOD_PATTERN;
         if (factor_) cholmod_free_factor(&factor_, &common_);
         factor_ = cholmod_analyze(&A, &common_);
         if (!factor_)

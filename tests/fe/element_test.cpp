@@ -136,3 +136,17 @@ TEST_CASE("a non-convex Q4 whose Gauss points are all positive is still rejected
     CHECK_THROWS_AS(element_stiffness(m, 0, plane_stress_D(m.materials[0]), k),
                     lapwing::AnalysisError);
 }
+
+TEST_CASE("a nearly collapsed element is reported as degenerate, with its det J against the mean") {
+    // Corner 3 pulled to within 1e-9 of corner 2: det J there is ~1e-9 of the mean.
+    const std::array<Vector2, 4> collapsed = {Vector2(0, 0), Vector2(1, 0), Vector2(1, 1),
+                                              Vector2(1 - 1e-9, 1)};
+    for (ElementKind kind : all_kinds) {
+        CAPTURE(name(kind));
+        const Model m = one_element(kind, collapsed);
+        ElementMatrixStorage k;
+        const std::string expected = "element 0 (" + std::string(name(kind)) + ") is degenerate";
+        CHECK_THROWS_WITH_AS(element_stiffness(m, 0, plane_stress_D(m.materials[0]), k),
+                             doctest::Contains(expected.c_str()), lapwing::AnalysisError);
+    }
+}

@@ -79,8 +79,8 @@ TEST_CASE(
     "MacNeal-Harder patch under boundary tractions: the same constant stress, supports minimal") {
     // Same patch, loaded by the exact tractions σ·n on its four sides and held
     // only against rigid motion (three dofs): the stress state must still be
-    // the exact constant one (a stronger form of the test, Taylor, Simo &
-    // Zienkiewicz 1986 "The patch test – a condition for assessing FEM
+    // the exact constant one (a stronger form of the test, Taylor, Simo,
+    // Zienkiewicz & Chan 1986 "The patch test – a condition for assessing FEM
     // convergence", IJNME 22:39).
     for (ElementKind kind : lapwing::test::all_kinds) {
         CAPTURE(name(kind));
