@@ -9,6 +9,7 @@
 
 #include "fe/model.hpp"
 
+#include <functional>
 #include <utility>
 #include <vector>
 
@@ -32,5 +33,12 @@ struct EdgeLoad {
 
 // (dof, force) pairs of the consistent nodal forces.
 std::vector<std::pair<int, double>> edge_load_forces(const Model& model, const EdgeLoad& load);
+
+// A traction given as a function of the point x on the edge and the edge's
+// outward unit normal there (MPa), integrated the same way; for loads that
+// are not linear along an edge, such as a cosine bearing pressure.
+using TractionField = std::function<Vector2(const Vector2& x, const Vector2& outward_normal)>;
+std::vector<std::pair<int, double>> edge_traction_forces(const Model& model, int element, int edge,
+                                                         const TractionField& traction);
 
 } // namespace lapwing::fe

@@ -65,3 +65,16 @@ TEST_CASE("pressure on a curved quadratic edge has the resultant p x chord x t, 
     CHECK(std::abs(sum.x()) < 1e-12);
     CHECK(sum.y() == lapwing::test::approx(4.0 * 2.0 * 0.5, 1e-12));
 }
+
+TEST_CASE("a traction field equal to a linear traction gives the same nodal forces") {
+    const Model m = lapwing::test::promote({{0, 0}, {3, 0}, {3, 1}, {0, 1}}, {{0, 1, 2, 3}},
+                                           ElementKind::Q8, {1.0, 0.3}, 2.0);
+    const auto linear = edge_load_forces(m, {0, 0, TractionFrame::global, {1.0, 0}, {1.0, 6.0}});
+    const auto field = edge_traction_forces(
+        m, 0, 0, [](const Vector2& x, const Vector2&) { return Vector2(1.0, 2.0 * x.x()); });
+    REQUIRE(linear.size() == field.size());
+    for (size_t i = 0; i < linear.size(); ++i) {
+        CHECK(linear[i].first == field[i].first);
+        CHECK(std::abs(linear[i].second - field[i].second) < 1e-12);
+    }
+}

@@ -1,0 +1,64 @@
+// Mesher benchmark: quadrilaterals per second on plates of about 10³ to 10⁶
+// elements, and peak resident memory (getrusage). Run a few times and quote
+// medians: `build/bench/tests/bench/mesh/mesh_bench [repeats]`.
+#include "mesh/mesh.hpp"
+
+#include <algorithm>
+#include <chrono>
+#include <cstdio>
+#include <cstdlib>
+#include <sys/resource.h>
+#include <vector>
+
+using namespace lapwing;
+
+namespace {
+
+// A 600 × 400 gusset-like plate: a fillet, a notch, a 3 × 4 bolt group of
+// d 22 holes and a slot; the element size sets the element count.
+geometry::PlateRegion plate() {
+    geometry::PlateRegion r;
+    r.outline = {{{0, 0}}, {{600, 0}}, {{600, 400}, 0, 60}, {{0, 400}, 30, 0}};
+    for (int i = 0; i < 3; ++i)
+        for (int j = 0; j < 4; ++j)
+            r.holes.push_back(geometry::Hole::circle({300 + 70.0 * j, 120 + 70.0 * i}, 22));
+    r.holes.push_back(geometry::Hole::slot({120, 300}, 60, 22, 30));
+    r.cutouts = {{{{-10, -10}, {100, -10}, {100, 60}, {-10, 60}}}};
+    return r;
+}
+
+double peak_rss_mb() {
+    rusage u{};
+    getrusage(RUSAGE_SELF, &u);
+    return static_cast<double>(u.ru_maxrss) / 1024.0; // Linux: kilobytes
+}
+
+} // namespace
+
+int main(int argc, char** argv) {
+    const int repeats = argc > 1 ? std::atoi(argv[1]) : 3;
+    std::printf("%10s %6s %12s %12s %14s %12s\n", "size_mm", "kind", "elements", "median_s",
+                "quads_per_s", "peak_rss_MB");
+    for (double size : {40.0, 12.0, 4.0, 1.2, 0.55}) {
+        for (auto kind : {fe::ElementKind::Q4, fe::ElementKind::Q8}) {
+            mesh::MeshSettings s;
+            s.kind = kind;
+            s.element_size = size;
+            std::vector<double> times;
+            int n = 0;
+            for (int k = 0; k < repeats; ++k) {
+                const auto t0 = std::chrono::steady_clock::now();
+                const mesh::Mesh m = mesh::build_mesh(plate(), s);
+                const auto t1 = std::chrono::steady_clock::now();
+                times.push_back(std::chrono::duration<double>(t1 - t0).count());
+                n = m.n_elements();
+            }
+            std::sort(times.begin(), times.end());
+            const double median = times[times.size() / 2];
+            std::printf("%10.2f %6s %12d %12.4f %14.0f %12.1f\n", size, fe::name(kind).data(), n,
+                        median, n / median, peak_rss_mb());
+            std::fflush(stdout);
+        }
+    }
+    return 0;
+}
