@@ -68,6 +68,21 @@ int run(int argc, char** argv) {
         "Bad input: exit code 2, every problem on standard error as\n"
         "FILE:LINE:COLUMN: key.path = value: what is valid.");
 
+    std::string mesh_file, mesh_folder;
+    std::vector<std::string> mesh_sets;
+    auto* mesh_cmd = app.add_subcommand(
+        "mesh", "Validate a template, mesh its plate, write mesh.svg and mesh.vtu");
+    mesh_cmd->add_option("FILE", mesh_file, "Connection template (TOML)")->required();
+    mesh_cmd->add_option(
+        "--set", mesh_sets,
+        "Override one key before meshing, KEY=VALUE (repeatable), as for validate");
+    mesh_cmd->add_option("-o,--output", mesh_folder,
+                         "Folder for mesh.svg and mesh.vtu (default: the current folder)");
+    mesh_cmd->footer(
+        "Prints the element count and quality figures. The files are written through a temporary\n"
+        "file and a rename; nothing is written when the input is bad (exit code 2).\n"
+        "Example: lapwing mesh G3.toml -o out");
+
 #ifdef LAPWING_HAS_VERIFY
     std::string example = "all";
     auto* verify_cmd = app.add_subcommand(
@@ -75,7 +90,9 @@ int run(int argc, char** argv) {
     verify_cmd->add_option("EXAMPLE", example, "One example by name, or all (the default)");
     std::string examples = "Examples:";
     for (const auto& name : verify_examples()) examples += " " + name;
-    verify_cmd->footer(examples + "\nExit codes: 0 every value within its tolerance, 1 one is not, 2 unknown example.");
+    verify_cmd->footer(
+        examples +
+        "\nExit codes: 0 every value within its tolerance, 1 one is not, 2 unknown example.");
 #endif
 
     try {
@@ -86,6 +103,8 @@ int run(int argc, char** argv) {
     }
 
     if (new_cmd->parsed()) return run_new(kind, output, force, std::cout, std::cerr);
+    if (mesh_cmd->parsed())
+        return run_mesh(mesh_file, mesh_sets, mesh_folder, std::cout, std::cerr);
     if (validate_cmd->parsed()) return run_validate(file, sets, resolved, std::cout, std::cerr);
 #ifdef LAPWING_HAS_VERIFY
     if (verify_cmd->parsed()) return run_verify(example, std::cout);

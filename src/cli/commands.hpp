@@ -26,6 +26,11 @@ int run_new(const std::string& kind, const std::string& file, bool force, std::o
 int run_validate(const std::string& file, const std::vector<std::string>& sets, bool resolved,
                  std::ostream& out, std::ostream& err);
 
+// `lapwing mesh FILE [--set ...] [-o DIR]`: meshes the plate and writes
+// DIR/mesh.svg and DIR/mesh.vtu atomically (DIR defaults to ".").
+int run_mesh(const std::string& file, const std::vector<std::string>& sets,
+             const std::string& folder, std::ostream& out, std::ostream& err);
+
 // Prints every diagnostic of a lapwing::InputError (or any exception) and
 // gives the exit code. Used by every command.
 int report_failure(std::ostream& err);
