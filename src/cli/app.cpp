@@ -1,0 +1,93 @@
+// The command line (CLI11, kept in this one file): subcommands, their help
+// and the mapping of CLI11's own errors to the "bad input" exit code.
+#include "cli/app.hpp"
+
+#include "cli/commands.hpp"
+#include "core/error.hpp"
+
+#include <CLI/CLI.hpp>
+#include <iostream>
+
+#ifdef LAPWING_HAS_VERIFY
+#include "cli/verify_command.hpp"
+#endif
+
+namespace lapwing::cli {
+
+namespace {
+
+std::string kinds_list() {
+    std::string out = "Kinds:\n";
+    for (const auto& k : template_kinds())
+        out += "  " + k.name + std::string(16 - std::min<size_t>(15, k.name.size()), ' ') +
+               k.description + "\n";
+    return out;
+}
+
+} // namespace
+
+int run(int argc, char** argv) {
+    CLI::App app{
+        "lapwing: checks steel connection plates (gusset and splice plates) by plane-stress\n"
+        "finite elements. Describe one plate in a TOML template, then validate it."};
+    app.name("lapwing");
+    app.set_version_flag("--version",
+                         std::string("lapwing ") + LAPWING_VERSION + " (" + LAPWING_BUILD_ID + ")",
+                         "Print the program version and build, then stop");
+    app.require_subcommand(1, 1);
+    app.footer("Exit codes: 0 success, 2 bad input (every problem is listed with file:line).\n"
+               "Run `lapwing COMMAND --help` for the options of one command.");
+
+    std::string kind, output;
+    bool force = false;
+    auto* new_cmd = app.add_subcommand(
+        "new", "Write a fully commented starting template of one connection kind");
+    new_cmd->add_option("KIND", kind, "Connection kind (listed below)")->required();
+    new_cmd->add_option("-o,--output", output, "File to write (default: print to standard output)");
+    new_cmd->add_flag("--force", force,
+                      "Replace FILE if it already exists (otherwise it is left alone)");
+    new_cmd->footer(kinds_list() + "\nExample: lapwing new corner-gusset -o G3.toml");
+
+    std::string file;
+    std::vector<std::string> sets;
+    auto* validate_cmd = app.add_subcommand(
+        "validate",
+        "Resolve parameters and expressions, check every value, print the resolved model");
+    validate_cmd->add_option("FILE", file, "Connection template (TOML)")->required();
+    validate_cmd->add_option(
+        "--set", sets,
+        "Override one key before validating, KEY=VALUE (repeatable); the value is TOML, "
+        "e.g. --set parameters.t=14 --set 'job.revision=\"B\"' --set bolt_group[0].rows=5");
+    bool resolved = false;
+    validate_cmd->add_flag(
+        "--resolved", resolved,
+        "Print the resolved template (plain numbers in the template's units) instead of "
+        "the summary");
+    validate_cmd->footer(
+        "Prints the summary in the template's own units and ends with \"FILE: valid\".\n"
+        "Bad input: exit code 2, every problem on standard error as\n"
+        "FILE:LINE:COLUMN: key.path = value: what is valid.");
+
+#ifdef LAPWING_HAS_VERIFY
+    std::string example = "all";
+    auto* verify_cmd = app.add_subcommand(
+        "verify", "Run the shipped verification examples (published benchmarks)");
+    verify_cmd->add_option("EXAMPLE", example, "One example by name, or all (the default)");
+#endif
+
+    try {
+        app.parse(argc, argv);
+    } catch (const CLI::ParseError& e) {
+        const int code = app.exit(e); // prints help, the version, or the error
+        return code == 0 ? 0 : static_cast<int>(ExitCode::bad_input);
+    }
+
+    if (new_cmd->parsed()) return run_new(kind, output, force, std::cout, std::cerr);
+    if (validate_cmd->parsed()) return run_validate(file, sets, resolved, std::cout, std::cerr);
+#ifdef LAPWING_HAS_VERIFY
+    if (verify_cmd->parsed()) return run_verify(example, std::cout);
+#endif
+    return static_cast<int>(ExitCode::bad_input);
+}
+
+} // namespace lapwing::cli

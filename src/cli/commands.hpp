@@ -1,0 +1,33 @@
+// The subcommands, each a function from its arguments to an exit code; the
+// CLI11 wiring lives in app.cpp.
+#pragma once
+
+#include <iosfwd>
+#include <string>
+#include <vector>
+
+namespace lapwing::cli {
+
+// Kinds `lapwing new` can write, with a one-line description each.
+struct TemplateKind {
+    std::string name;
+    std::string description;
+    std::string text; // the commented template
+};
+const std::vector<TemplateKind>& template_kinds();
+
+// `lapwing new KIND [-o FILE] [--force]`: the template to FILE, or to `out`
+// when FILE is empty.
+int run_new(const std::string& kind, const std::string& file, bool force, std::ostream& out,
+            std::ostream& err);
+
+// `lapwing validate FILE [--set KEY=VALUE ...] [--resolved]`: the resolved
+// summary (or, with `resolved`, the resolved template) to `out`.
+int run_validate(const std::string& file, const std::vector<std::string>& sets, bool resolved,
+                 std::ostream& out, std::ostream& err);
+
+// Prints every diagnostic of a lapwing::InputError (or any exception) and
+// gives the exit code. Used by every command.
+int report_failure(std::ostream& err);
+
+} // namespace lapwing::cli

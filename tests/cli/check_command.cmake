@@ -1,0 +1,40 @@
+# Runs the lapwing executable once and checks its exit code and output.
+#   -DEXE=path -DARGS="a|b|c" -DCODE=n [-DEXPECT=text] [-DREJECT=text]
+#   [-DWORKDIR=dir] [-DCREATE=file] [-DKEEP=file]
+# CREATE writes a file with known content first; KEEP checks afterwards that the
+# file still has that content (an input must never be overwritten).
+cmake_minimum_required(VERSION 3.25)
+string(REPLACE "|" ";" arguments "${ARGS}")
+if(NOT WORKDIR)
+  set(WORKDIR ".")
+endif()
+file(MAKE_DIRECTORY "${WORKDIR}")
+set(sentinel "# kept as it was\n")
+if(CREATE)
+  file(WRITE "${WORKDIR}/${CREATE}" "${sentinel}")
+endif()
+execute_process(COMMAND "${EXE}" ${arguments}
+  WORKING_DIRECTORY "${WORKDIR}"
+  RESULT_VARIABLE code OUTPUT_VARIABLE out ERROR_VARIABLE err)
+set(all "${out}${err}")
+if(NOT code EQUAL CODE)
+  message(FATAL_ERROR "exit code ${code}, expected ${CODE}\n--- output ---\n${all}")
+endif()
+if(DEFINED EXPECT)
+  string(FIND "${all}" "${EXPECT}" at)
+  if(at EQUAL -1)
+    message(FATAL_ERROR "output lacks \"${EXPECT}\"\n--- output ---\n${all}")
+  endif()
+endif()
+if(DEFINED REJECT)
+  string(FIND "${all}" "${REJECT}" at)
+  if(NOT at EQUAL -1)
+    message(FATAL_ERROR "output has \"${REJECT}\"\n--- output ---\n${all}")
+  endif()
+endif()
+if(KEEP)
+  file(READ "${WORKDIR}/${KEEP}" now)
+  if(NOT now STREQUAL sentinel)
+    message(FATAL_ERROR "${KEEP} was changed")
+  endif()
+endif()
