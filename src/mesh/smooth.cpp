@@ -1,0 +1,150 @@
+// Constrained Laplacian smoothing (Field 1988, "Laplacian smoothing and
+// Delaunay triangulations": plain Laplacian can invert elements, so each move
+// is kept only if it does not worsen the adjacent elements).
+#include "mesh/quad_split.hpp"
+#include "mesh/shape_derivatives.hpp"
+
+#include <algorithm>
+#include <cmath>
+
+namespace lapwing::mesh::detail {
+
+namespace {
+
+// Quality of a straight-sided quadrilateral for smoothing: the smaller of
+// the corner det J ratio (min / max of the corner cross products, which for a
+// bilinear map are the extreme values of det J) over 0.3 and the smallest
+// corner sine over sin 30°: 1 at the quality targets. <= 0 when a corner folds.
+double straight_metric(const std::vector<Eigen::Vector2d>& x, const int* q) {
+    double lo = HUGE_VAL, hi = -HUGE_VAL, sine = 1.0;
+    for (int k = 0; k < 4; ++k) {
+        const Eigen::Vector2d& p = x[q[k]];
+        const Eigen::Vector2d a = x[q[(k + 1) % 4]] - p, b = x[q[(k + 3) % 4]] - p;
+        const double cr = a.x() * b.y() - a.y() * b.x();
+        lo = std::min(lo, cr);
+        hi = std::max(hi, cr);
+        sine = std::min(sine, cr / (a.norm() * b.norm()));
+    }
+    if (hi <= 0) return -1.0;
+    return std::min(lo / hi / 0.3, sine / 0.5);
+}
+
+// The same with a curved edge: det J of the eight-node map at the 3×3 Gauss
+// points and the nodes, mid-sides on the curve where given.
+double curved_metric(const std::vector<Eigen::Vector2d>& x, const int* q,
+                     const Eigen::Vector2d* mid) {
+    Eigen::Matrix<double, 2, 9> c = Eigen::Matrix<double, 2, 9>::Zero();
+    for (int k = 0; k < 4; ++k) {
+        c.col(k) = x[q[k]];
+        c.col(4 + k) =
+            std::isnan(mid[k].x()) ? Eigen::Vector2d(0.5 * (x[q[k]] + x[q[(k + 1) % 4]])) : mid[k];
+    }
+    const double g = std::sqrt(0.6);
+    double lo = HUGE_VAL, hi = -HUGE_VAL;
+    for (double xi : {-1.0, -g, 0.0, g, 1.0}) {
+        for (double eta : {-1.0, -g, 0.0, g, 1.0}) {
+            const bool node = std::abs(xi) != g && std::abs(eta) != g;
+            const bool gauss = std::abs(xi) != 1.0 && std::abs(eta) != 1.0;
+            if (!node && !gauss) continue;
+            const double d = jacobian_determinant(fe::ElementKind::Q8, c, xi, eta);
+            lo = std::min(lo, d);
+            hi = std::max(hi, d);
+        }
+    }
+    if (hi <= 0) return -1.0;
+    return std::min(lo / hi / 0.3, straight_metric(x, q));
+}
+
+} // namespace
+
+void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
+            const std::vector<bool>& fixed, const std::vector<Eigen::Vector2d>& curved_mid,
+            int passes) {
+    const auto quad_metric = [&](const std::vector<Eigen::Vector2d>& x, const int* q) {
+        const size_t at = static_cast<size_t>(q - quads.data());
+        if (!curved_mid.empty()) {
+            for (int k = 0; k < 4; ++k)
+                if (!std::isnan(curved_mid[at + k].x()))
+                    return curved_metric(x, q, &curved_mid[at]);
+        }
+        return straight_metric(x, q);
+    };
+    const int n_nodes = static_cast<int>(fixed.size());
+    const int n_quads = static_cast<int>(quads.size() / 4);
+    // Node → quadrilaterals, compressed rows.
+    std::vector<int> start(n_nodes + 1, 0), list(quads.size());
+    for (int v : quads) ++start[v + 1];
+    for (int i = 0; i < n_nodes; ++i) start[i + 1] += start[i];
+    std::vector<int> fill(start.begin(), start.end() - 1);
+    for (int q = 0; q < n_quads; ++q)
+        for (int k = 0; k < 4; ++k) list[fill[quads[4 * q + k]]++] = q;
+
+    for (int pass = 0; pass < passes; ++pass) {
+        for (int v = 0; v < n_nodes; ++v) {
+            if (fixed[v]) continue;
+            // Mean of edge neighbours: each interior edge is seen from both of
+            // its quadrilaterals, so every neighbour counts twice.
+            Eigen::Vector2d sum = Eigen::Vector2d::Zero();
+            int count = 0;
+            double before = 1.0;
+            for (int i = start[v]; i < start[v + 1]; ++i) {
+                const int* q = &quads[4 * list[i]];
+                int k = 0;
+                while (q[k] != v) ++k;
+                sum += nodes[q[(k + 1) % 4]] + nodes[q[(k + 3) % 4]];
+                count += 2;
+                before = std::min(before, quad_metric(nodes, q));
+            }
+            if (count == 0) continue;
+            const Eigen::Vector2d old = nodes[v];
+            nodes[v] = sum / count;
+            double after = 1.0;
+            for (int i = start[v]; i < start[v + 1]; ++i)
+                after = std::min(after, quad_metric(nodes, &quads[4 * list[i]]));
+            if (after < before) nodes[v] = old;
+        }
+    }
+
+    // Local optimisation where smoothing left a poor element: compass
+    // search on each free corner of it, maximising the worst adjacent metric.
+    const auto worst_at = [&](int v) {
+        double w = HUGE_VAL;
+        for (int i = start[v]; i < start[v + 1]; ++i)
+            w = std::min(w, quad_metric(nodes, &quads[4 * list[i]]));
+        return w;
+    };
+    for (int round = 0; round < 3; ++round) {
+        for (int q = 0; q < n_quads; ++q) {
+            if (quad_metric(nodes, &quads[4 * q]) >= 1.2) continue;
+            for (int k = 0; k < 4; ++k) {
+                const int v = quads[4 * q + k];
+                if (fixed[v]) continue;
+                double best = worst_at(v);
+                double step = 0.0;
+                for (int i = start[v]; i < start[v + 1]; ++i) {
+                    const int* qq = &quads[4 * list[i]];
+                    for (int c = 0; c < 4; ++c)
+                        step += (nodes[qq[(c + 1) % 4]] - nodes[qq[c]]).norm();
+                }
+                step *= 0.1 / (4.0 * (start[v + 1] - start[v]));
+                for (int iter = 0; iter < 12 && step > 0; ++iter) {
+                    const Eigen::Vector2d base = nodes[v];
+                    Eigen::Vector2d best_pos = base;
+                    for (int d = 0; d < 8; ++d) {
+                        const double angle = d * 0.7853981633974483;
+                        nodes[v] = base + step * Eigen::Vector2d(std::cos(angle), std::sin(angle));
+                        const double w = worst_at(v);
+                        if (w > best) {
+                            best = w;
+                            best_pos = nodes[v];
+                        }
+                    }
+                    nodes[v] = best_pos;
+                    if (best_pos == base) step *= 0.5;
+                }
+            }
+        }
+    }
+}
+
+} // namespace lapwing::mesh::detail
