@@ -35,13 +35,30 @@ int spring_dofs(const Spring& s, std::array<int, 18>& dofs) {
     return 2;
 }
 
+// Dofs (ux_a, uy_a[, ux_b, uy_b]) of a link spring and its coefficient
+// vector c, so that the stretch is c · u and the stiffness k c cᵀ.
+int link_dofs(const LinkSpring& s, std::array<int, 18>& dofs, Eigen::Vector4d& c) {
+    dofs[0] = dof_ux(s.node_a);
+    dofs[1] = dof_uy(s.node_a);
+    c << -s.direction.x(), -s.direction.y(), s.direction.x(), s.direction.y();
+    if (s.node_b < 0) {
+        c.head<2>() = s.direction; // to the ground: stretch = u_a · n
+        return 2;
+    }
+    dofs[2] = dof_ux(s.node_b);
+    dofs[3] = dof_uy(s.node_b);
+    return 4;
+}
+
 // Calls f(dofs, n_dofs) for every element, then every spring.
 template <typename F>
 void for_each_block(const Model& model, F&& f) {
     std::array<int, 18> dofs{};
+    Eigen::Vector4d c;
     for (int e = 0; e < static_cast<int>(model.elements.size()); ++e)
         f(dofs, element_dofs(model, e, dofs));
     for (const Spring& s : model.springs) f(dofs, spring_dofs(s, dofs));
+    for (const LinkSpring& s : model.link_springs) f(dofs, link_dofs(s, dofs, c));
 }
 
 } // namespace
@@ -168,6 +185,12 @@ void Assembler::assemble(const Model& model, std::vector<double>& values,
         ks << s.k, -s.k, -s.k, s.k;
         add_generic(dofs, n_dofs, ks);
     }
+    Eigen::Vector4d c;
+    for (const LinkSpring& s : model.link_springs) {
+        const int n_dofs = link_dofs(s, dofs, c);
+        const Eigen::Matrix4d kl = s.k * c * c.transpose();
+        add_generic(dofs, n_dofs, kl);
+    }
 }
 
 Eigen::MatrixXd Assembler::internal_forces(const Model& model, const Eigen::MatrixXd& u) const {
@@ -192,6 +215,14 @@ Eigen::MatrixXd Assembler::internal_forces(const Model& model, const Eigen::Matr
                         : Eigen::RowVectorXd(u.row(s.dof_a) - u.row(s.dof_b));
         f.row(s.dof_a) += s.k * stretch;
         if (s.dof_b >= 0) f.row(s.dof_b) -= s.k * stretch;
+    }
+    Eigen::Vector4d c;
+    for (const LinkSpring& s : model.link_springs) {
+        const int n_dofs = link_dofs(s, dofs, c);
+        Eigen::RowVectorXd stretch = Eigen::RowVectorXd::Zero(u.cols());
+        for (int a = 0; a < n_dofs; ++a) stretch += c(a) * u.row(dofs[static_cast<size_t>(a)]);
+        for (int a = 0; a < n_dofs; ++a)
+            f.row(dofs[static_cast<size_t>(a)]) += s.k * c(a) * stretch;
     }
     return f;
 }

@@ -26,6 +26,17 @@ struct Spring {
     double k = 0;
 };
 
+// A spring along a fixed unit direction n between two nodes, with energy
+// ½ k ((u_b − u_a) · n)²; node_b < 0 ties node_a to the ground. Its stiffness
+// may be refilled (0 switches it off) without changing the sparsity pattern,
+// which is what contact by an active set needs.
+struct LinkSpring {
+    int node_a = -1;
+    int node_b = -1;
+    Vector2 direction{1, 0};
+    double k = 0;
+};
+
 // Every node carries ux (dof 2i) and uy (dof 2i+1). A node listed in
 // rotation_nodes also carries an in-plane rotation θ (rigid-body reference
 // points such as member work points); its θ dof is 2·n_nodes + its position
@@ -35,6 +46,7 @@ struct Model {
     std::vector<Element> elements;
     std::vector<Material> materials;
     std::vector<Spring> springs;
+    std::vector<LinkSpring> link_springs;
     std::vector<int> rotation_nodes;
 
     int n_nodes() const { return static_cast<int>(nodes.size()); }

@@ -6,6 +6,7 @@
 #include "fe/structured_grid.hpp"
 #include "support/approx.hpp"
 
+#include <Eigen/LU>
 #include <doctest/doctest.h>
 
 using namespace lapwing::fe;
@@ -152,4 +153,32 @@ TEST_CASE("springs to ground restrain a model and carry its reaction") {
     CHECK(ground == lapwing::test::approx(300.0, 1e-9));
     // No dof is constrained, so K u − f vanishes everywhere.
     CHECK(s.reactions.cwiseAbs().maxCoeff() < 1e-9 * 300.0);
+}
+
+TEST_CASE("link springs act along their direction only, to the ground and between nodes") {
+    // Node 0 held by a spring k1 along x to the ground and a spring k2 along
+    // 45° to node 1, which is pinned; a force F at node 0. Exact answer from
+    // the 2×2 system (k1 e_x e_xᵀ + k2 n nᵀ) u = F (elementary statics).
+    Model m;
+    m.nodes = {Vector2(0, 0), Vector2(5, 5)};
+    const double k1 = 300, k2 = 500;
+    const Vector2 n = Vector2(1, 1).normalized();
+    m.link_springs = {{0, -1, Vector2(1, 0), k1}, {0, 1, n, k2}};
+    Constraints c;
+    c.prescribed = {{dof_ux(1), 0}, {dof_uy(1), 0}};
+    const LinearStaticProblem problem(m, c);
+    Loads loads;
+    loads.nodal = {{dof_ux(0), 7.0}, {dof_uy(0), -2.0}};
+    const Solution s = problem.solve(loads);
+    Eigen::Matrix2d K = k1 * Vector2(1, 0) * Vector2(1, 0).transpose() + k2 * n * n.transpose();
+    const Vector2 exact = K.inverse() * Vector2(7.0, -2.0);
+    CHECK(s.u(0) == lapwing::test::approx(exact.x(), 1e-12));
+    CHECK(s.u(1) == lapwing::test::approx(exact.y(), 1e-12));
+    // The pinned node carries the 45° spring's force, along n.
+    const double tension = k2 * (Vector2(0, 0) - Vector2(s.u(0), s.u(1))).dot(n);
+    CHECK(s.reactions(dof_ux(1)) == lapwing::test::approx(tension * n.x(), 1e-12));
+    // A spring switched off (k = 0) keeps the pattern but leaves x free here.
+    Model off = m;
+    off.link_springs[0].k = 0;
+    CHECK_THROWS_AS(LinearStaticProblem(off, c), lapwing::AnalysisError);
 }
