@@ -33,6 +33,8 @@ struct Constraints {
 // Small-rotation rigid link: the point dofs (ux, uy) of node `point` follow
 // the reference node (ux, uy, θ):  ux_p = ux_r − (y_p − y_r) θ,
 // uy_p = uy_r + (x_p − x_r) θ. The reference node must be a rotation node.
+// Rotation dofs are numbered after every node (model.hpp), so add all nodes
+// before the links: a node added later shifts the θ dof this link names.
 void add_rigid_link(const Model& model, int reference_node, int point_node,
                     Constraints& constraints);
 
