@@ -83,7 +83,7 @@ std::vector<FreeRigidMotion> free_rigid_motions(const Model& model, const DofMap
 
     std::vector<FreeRigidMotion> free;
     for (int k = 0; k < energy_modes.eigenvalues().size(); ++k) {
-        if (energy_modes.eigenvalues()(k) > 1e-9) continue;
+        if (energy_modes.eigenvalues()(k) > 1e-12) continue; // round-off energy is ~1e-16
         const Eigen::Vector3d a = basis * energy_modes.eigenvectors().col(k);
         FreeRigidMotion m;
         const double translation = std::hypot(a(0), a(1));

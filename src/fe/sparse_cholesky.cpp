@@ -103,8 +103,10 @@ public:
 
     void analyse(const SparsePattern& pattern) override {
         const auto start = std::chrono::steady_clock::now();
-        std::vector<double> zeros(static_cast<size_t>(pattern.nnz()), 0.0);
-        cholmod_sparse A = view(pattern, zeros);
+        // The ordering needs the structure only: a pattern matrix, rather
+        // than an nnz-long array of zeros allocated (and faulted in) for it.
+        cholmod_sparse A = view(pattern, {});
+        A.xtype = CHOLMOD_PATTERN;
         if (factor_) cholmod_free_factor(&factor_, &common_);
         factor_ = cholmod_analyze(&A, &common_);
         if (!factor_)
