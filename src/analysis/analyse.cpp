@@ -1,0 +1,248 @@
+// Solving every load case and combination, and turning displacements into
+// bolt forces, reactions and equilibrium figures.
+#include "analysis/analyse.hpp"
+
+#include "core/error.hpp"
+#include "fe/linear_static.hpp"
+#include "fe/recovery.hpp"
+
+#include <chrono>
+#include <cmath>
+#include <fmt/format.h>
+#include <numbers>
+#include <optional>
+#include <set>
+
+namespace lapwing::analysis {
+
+namespace {
+
+constexpr int max_contact_iterations = 40;
+
+struct CaseSpec {
+    std::string name;
+    bool combination = false;
+    std::map<std::string, double> factors;
+};
+
+double cross(const Eigen::Vector2d& a, const Eigen::Vector2d& b) {
+    return a.x() * b.y() - a.y() * b.x();
+}
+
+Eigen::Vector2d node_u(const Eigen::VectorXd& u, int node) {
+    return {u(fe::dof_ux(node)), u(fe::dof_uy(node))};
+}
+
+// Gap along each contact spring: (u_hole − u_bolt) · n; > 0 opens.
+double gap(const fe::LinkSpring& s, const Eigen::VectorXd& u) {
+    return (node_u(u, s.node_b) - node_u(u, s.node_a)).dot(s.direction);
+}
+
+void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& model,
+               const fe::Solution& s, CaseResult& out) {
+    out.u = s.u;
+    out.solver_residual = s.relative_residual;
+    auto nodal = fe::recover_spr(model, fe::spr_samples(model, s.u));
+    nodal.resize(static_cast<size_t>(p.n_plate_nodes));
+    out.nodal_stress = std::move(nodal);
+
+    // Applied loads: forces at nodes and moments on rotation dofs.
+    out.applied_force.setZero();
+    out.applied_moment = 0;
+    for (int n = 0; n < model.n_nodes(); ++n) {
+        const Eigen::Vector2d f(s.applied(fe::dof_ux(n)), s.applied(fe::dof_uy(n)));
+        out.applied_force += f;
+        out.applied_moment += cross(model.nodes[static_cast<size_t>(n)], f);
+    }
+    for (int r = 0; r < static_cast<int>(model.rotation_nodes.size()); ++r)
+        out.applied_moment += s.applied(fe::dof_rotation(model, r));
+    out.strain_energy = 0.5 * s.applied.dot(s.u);
+
+    // Bolt forces on the plate.
+    out.bolts.clear();
+    for (int i = 0; i < static_cast<int>(p.bolts.size()); ++i) {
+        const BoltModel& b = p.bolts[static_cast<size_t>(i)];
+        Eigen::Vector2d f(0, 0);
+        if (b.first_spring >= 0) {
+            const Eigen::Vector2d other =
+                b.other_node >= 0 ? node_u(s.u, b.other_node) : Eigen::Vector2d::Zero();
+            f = b.stiffness * (other - node_u(s.u, b.plate_node));
+        } else {
+            for (size_t j = 0; j < b.hole_nodes.size(); ++j) {
+                const fe::LinkSpring& spring =
+                    model.link_springs[static_cast<size_t>(b.first_contact) + j];
+                f -= spring.k * gap(spring, s.u) * spring.direction;
+            }
+        }
+        const double axis_deg = b.member >= 0 ? c.members[static_cast<size_t>(b.member)].angle
+                                              : c.bolt_groups[static_cast<size_t>(b.group)].angle;
+        const double a = axis_deg * std::numbers::pi / 180.0;
+        const double along = f.x() * std::cos(a) + f.y() * std::sin(a);
+        const double across = -f.x() * std::sin(a) + f.y() * std::cos(a);
+        out.bolts.push_back({i, f, f.norm(), std::atan2(across, along) * 180.0 / std::numbers::pi});
+    }
+
+    // Reactions per support, and the equilibrium check.
+    out.reactions.assign(p.supports.size(), {});
+    Eigen::Vector2d total_force = out.applied_force;
+    double total_moment = out.applied_moment;
+    for (size_t k = 0; k < p.supports.size(); ++k) {
+        const SupportModel& sm = p.supports[k];
+        SupportReaction& r = out.reactions[k];
+        for (int n : sm.nodes) {
+            const Eigen::Vector2d f(s.reactions(fe::dof_ux(n)), s.reactions(fe::dof_uy(n)));
+            r.force += f;
+            r.moment += cross(model.nodes[static_cast<size_t>(n)] - sm.about, f);
+        }
+        for (int bi : sm.bolts) {
+            const Eigen::Vector2d f = out.bolts[static_cast<size_t>(bi)].force;
+            r.force += f;
+            r.moment += cross(p.bolts[static_cast<size_t>(bi)].centre - sm.about, f);
+        }
+        total_force += r.force;
+        total_moment += r.moment + cross(sm.about, r.force);
+    }
+    const double scale = std::hypot(out.applied_force.norm(), out.applied_moment / p.size);
+    const double imbalance = std::hypot(total_force.norm(), total_moment / p.size);
+    out.equilibrium_residual = scale > 0 ? imbalance / scale : imbalance;
+}
+
+// Rewords the FE core's restraint messages for a connection.
+[[noreturn]] void rethrow_in_connection_terms(const model::Connection& c, const FeProblem& p,
+                                              const AnalysisError& e) {
+    const std::string what = e.what();
+    if (what.find("not restrained") != std::string::npos) {
+        int n_support_bolts = 0, n_other = 0;
+        Eigen::Vector2d at(0, 0);
+        for (const SupportModel& sm : p.supports) {
+            n_support_bolts += static_cast<int>(sm.bolts.size());
+            n_other += static_cast<int>(sm.nodes.size());
+            for (int b : sm.bolts) at = p.bolts[static_cast<size_t>(b)].centre;
+        }
+        if (c.supports.empty())
+            throw AnalysisError(
+                "the plate has no supports: add a welded edge, a bolt group fixed to a support, or "
+                "symmetry lines ([[support]])");
+        if (n_support_bolts == 1 && n_other == 0)
+            throw AnalysisError(fmt::format(
+                "the plate can rotate about the single support bolt at ({:.1f}, {:.1f}): "
+                "fix more bolts or an edge ({})",
+                at.x(), at.y(), what));
+        throw AnalysisError("the supports do not hold the plate: " + what);
+    }
+    throw AnalysisError(what);
+}
+
+} // namespace
+
+Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout) {
+    const auto start = std::chrono::steady_clock::now();
+    Results results;
+    results.problem = build_fe_problem(c, mesh, layout);
+    const FeProblem& p = results.problem;
+
+    std::vector<CaseSpec> specs;
+    for (const model::LoadCase& lc : c.load_cases)
+        specs.push_back({lc.name, false, {{lc.name, 1.0}}});
+    for (const model::Combination& comb : c.combinations)
+        specs.push_back({comb.name, true, comb.factors});
+
+    fe::Model working = p.model;
+    std::optional<fe::LinearStaticProblem> solver;
+    try {
+        solver.emplace(working, p.constraints);
+    } catch (const AnalysisError& e) {
+        rethrow_in_connection_terms(c, p, e);
+    }
+    results.cases.resize(specs.size());
+    if (!p.has_contact) {
+        // Linear: one factorization; combinations are factored sums.
+        std::vector<fe::Loads> loads;
+        std::vector<size_t> case_of;
+        for (size_t i = 0; i < specs.size(); ++i)
+            if (!specs[i].combination) {
+                loads.push_back(loads_for(c, mesh, p, specs[i].factors));
+                case_of.push_back(i);
+            }
+        const auto solutions = solver->solve(loads);
+        std::map<std::string, const fe::Solution*> by_name;
+        for (size_t k = 0; k < solutions.size(); ++k)
+            by_name[specs[case_of[k]].name] = &solutions[k];
+        for (size_t i = 0; i < specs.size(); ++i) {
+            CaseResult& out = results.cases[i];
+            out.name = specs[i].name;
+            out.combination = specs[i].combination;
+            fe::Solution s;
+            s.u = Eigen::VectorXd::Zero(working.n_dofs());
+            s.reactions = s.applied = s.u;
+            for (const auto& [name, factor] : specs[i].factors) {
+                const auto it = by_name.find(name);
+                if (it == by_name.end()) continue;
+                s.u += factor * it->second->u;
+                s.reactions += factor * it->second->reactions;
+                s.applied += factor * it->second->applied;
+                s.relative_residual = std::max(s.relative_residual, it->second->relative_residual);
+            }
+            fill_case(c, p, working, s, out);
+        }
+    } else {
+        // Bearing-only contact: each case and combination by its own active set.
+        std::vector<double> k0(working.link_springs.size());
+        for (size_t j = 0; j < k0.size(); ++j) k0[j] = working.link_springs[j].k;
+        for (size_t i = 0; i < specs.size(); ++i) {
+            CaseResult& out = results.cases[i];
+            out.name = specs[i].name;
+            out.combination = specs[i].combination;
+            const fe::Loads loads = loads_for(c, mesh, p, specs[i].factors);
+            std::vector<bool> active(k0.size(), true);
+            std::set<std::vector<bool>> seen;
+            bool settled = false;
+            fe::Solution s;
+            for (int iteration = 1; iteration <= max_contact_iterations; ++iteration) {
+                bool changed = false;
+                for (size_t j = 0; j < k0.size(); ++j) {
+                    const double k = active[j] ? k0[j] : 0.0;
+                    if (working.link_springs[j].k != k)
+                        working.link_springs[j].k = k, changed = true;
+                }
+                try {
+                    if (changed) solver->refactorize(working);
+                } catch (const AnalysisError& e) {
+                    rethrow_in_connection_terms(c, p, e);
+                }
+                s = solver->solve(loads);
+                seen.insert(active);
+                const double tol = 1e-9 * std::max(1e-30, s.u.cwiseAbs().maxCoeff());
+                std::vector<bool> next = active;
+                for (size_t j = 0; j < k0.size(); ++j) {
+                    const double g = gap(working.link_springs[j], s.u);
+                    if (active[j] && g > tol) next[j] = false;  // pulling apart: no contact
+                    if (!active[j] && g < -tol) next[j] = true; // closing in: contact
+                }
+                out.contact_iterations = iteration;
+                if (next == active) {
+                    settled = true;
+                    break;
+                }
+                if (seen.count(next))
+                    throw AnalysisError(fmt::format(
+                        "bearing contact in load case \"{}\" does not settle: the set of "
+                        "contacting hole nodes cycles after {} passes; use the spread tie "
+                        "for the bolt groups of this case",
+                        out.name, iteration));
+                active = std::move(next);
+            }
+            if (!settled)
+                throw AnalysisError(
+                    fmt::format("bearing contact in load case \"{}\" did not settle in {} passes",
+                                out.name, max_contact_iterations));
+            out.contact_closed.assign(active.begin(), active.end());
+            fill_case(c, p, working, s, out);
+        }
+    }
+    results.seconds_solve =
+        std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
+    return results;
+}
+
+} // namespace lapwing::analysis
