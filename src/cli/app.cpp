@@ -83,6 +83,18 @@ int run(int argc, char** argv) {
         "file and a rename; nothing is written when the input is bad (exit code 2).\n"
         "Example: lapwing mesh G3.toml -o out");
 
+    std::string analyse_file;
+    std::vector<std::string> analyse_sets;
+    auto* analyse_cmd = app.add_subcommand(
+        "analyse", "Validate, mesh and solve every load case; print bolt forces and reactions");
+    analyse_cmd->add_option("FILE", analyse_file, "Connection template (TOML)")->required();
+    analyse_cmd->add_option("--set", analyse_sets,
+                            "Override one key, KEY=VALUE (repeatable), as for validate");
+    analyse_cmd->footer(
+        "Exit codes: 0 solved, 2 bad input or a model that cannot be solved (the message says\n"
+        "what and where, e.g. a plate that can rotate about a single support bolt).\n"
+        "Example: lapwing analyse G3.toml --set parameters.t=12");
+
 #ifdef LAPWING_HAS_VERIFY
     std::string example = "all";
     auto* verify_cmd = app.add_subcommand(
@@ -105,6 +117,7 @@ int run(int argc, char** argv) {
     if (new_cmd->parsed()) return run_new(kind, output, force, std::cout, std::cerr);
     if (mesh_cmd->parsed())
         return run_mesh(mesh_file, mesh_sets, mesh_folder, std::cout, std::cerr);
+    if (analyse_cmd->parsed()) return run_analyse(analyse_file, analyse_sets, std::cout, std::cerr);
     if (validate_cmd->parsed()) return run_validate(file, sets, resolved, std::cout, std::cerr);
 #ifdef LAPWING_HAS_VERIFY
     if (verify_cmd->parsed()) return run_verify(example, std::cout);

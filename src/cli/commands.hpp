@@ -31,6 +31,12 @@ int run_validate(const std::string& file, const std::vector<std::string>& sets, 
 int run_mesh(const std::string& file, const std::vector<std::string>& sets,
              const std::string& folder, std::ostream& out, std::ostream& err);
 
+// `lapwing analyse FILE [--set ...]`: meshes and solves every load case and
+// combination; prints bolt forces, reactions and equilibrium residuals.
+// Exit 2 for bad input or a model that cannot be solved.
+int run_analyse(const std::string& file, const std::vector<std::string>& sets, std::ostream& out,
+                std::ostream& err);
+
 // Prints every diagnostic of a lapwing::InputError (or any exception) and
 // gives the exit code. Used by every command.
 int report_failure(std::ostream& err);
