@@ -182,7 +182,8 @@ private:
 
 } // namespace
 
-std::unique_ptr<SparseCholesky> make_sparse_cholesky(const SolverOptions& options) {
+std::unique_ptr<SparseCholesky>
+make_sparse_cholesky([[maybe_unused]] const SolverOptions& options) {
 #ifdef LAPWING_HAVE_CHOLMOD
     if (options.backend == SolverBackend::cholmod)
         return std::make_unique<Cholmod>(options.ordering);
