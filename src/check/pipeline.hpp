@@ -1,0 +1,78 @@
+// The whole check of one connection: mesh, analysis, sections, peaks, the
+// classical limit states and the check table, plus the same model solved on
+// a finer mesh as evidence of mesh convergence. A function of its inputs
+// only, so a sweep can run many of them in parallel.
+#pragma once
+
+#include "analysis/plate_region.hpp"
+#include "analysis/results.hpp"
+#include "check/check_table.hpp"
+#include "check/section.hpp"
+#include "mesh/mesh.hpp"
+#include "model/connection.hpp"
+
+#include <string>
+#include <vector>
+
+namespace lapwing::check {
+
+struct CheckOptions {
+    // Also solve on a mesh with half the element size everywhere (twice the
+    // elements around each hole) and report how every peak and section value
+    // moves. Off only for quick looks; the calc sheet says so.
+    bool two_mesh = true;
+};
+
+// The highest local stresses of one load case, from the recovered nodal and
+// the Gauss-point values (whichever is higher): local, mesh dependent peaks.
+struct PeakStress {
+    double von_mises = 0;
+    Eigen::Vector2d von_mises_at{0, 0};
+    double max_principal = 0; // largest σ1, MPa
+    Eigen::Vector2d max_principal_at{0, 0};
+    double min_principal = 0; // smallest σ2 (most compressive), MPa
+    Eigen::Vector2d min_principal_at{0, 0};
+    std::string near; // words for the location, e.g. "edge of hole brace[2]"
+};
+
+// One value on the model's mesh and on the finer mesh.
+struct ConvergenceRow {
+    std::string quantity; // e.g. "peak von Mises", "membrane on whitmore-brace"
+    std::string load_case;
+    Quantity unit = Quantity::stress;
+    double coarse = 0, fine = 0;
+    double change() const; // (fine − coarse) / |fine|, 0 when both vanish
+};
+
+struct Convergence {
+    bool done = false;
+    double coarse_size = 0, fine_size = 0; // element sizes, mm
+    int coarse_elements = 0, fine_elements = 0;
+    int coarse_dofs = 0, fine_dofs = 0;
+    std::vector<ConvergenceRow> rows;
+    double largest_change() const; // largest |change()|
+};
+
+struct Timings {
+    double mesh = 0, analysis = 0, checks = 0, fine_mesh = 0; // seconds
+};
+
+// Everything the calc sheet, results.json and a sweep need about one run.
+struct CheckOutcome {
+    model::Connection connection;
+    analysis::PlateLayout layout;
+    mesh::Mesh mesh;
+    analysis::Results results;
+    std::vector<SectionLine> sections;
+    std::vector<std::vector<SectionStress>> section_stress; // [case][section], Results::cases order
+    std::vector<PeakStress> peaks;                          // per case
+    CheckTable table;
+    Convergence convergence;
+    Timings seconds;
+};
+
+// Throws InputError for connection data that cannot be modelled and
+// AnalysisError for a model that cannot be solved.
+CheckOutcome check_connection(const model::Connection& connection, const CheckOptions& options);
+
+} // namespace lapwing::check
