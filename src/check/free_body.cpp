@@ -31,11 +31,13 @@ int find_root(std::vector<int>& parent, int i) {
     return i;
 }
 
-// Σ over `elements` of their nodal forces k_e u_e at the nodes in `cut`,
-// as a force and its moment about `centre`.
+// Σ over `elements` of weight(e) times their nodal forces k_e u_e at the
+// nodes in `cut`, as a force and its moment about `centre`.
+template <typename Weight>
 void add_nodal_forces(const fe::Model& model, const Eigen::VectorXd& u,
                       const std::vector<int>& elements, const std::vector<char>& cut,
-                      const Vector2d& centre, Vector2d& force, double& moment) {
+                      const Vector2d& centre, const Weight& weight, Vector2d& force,
+                      double& moment) {
     fe::ElementMatrixStorage k;
     Eigen::Matrix<double, 18, 1> u_e;
     for (const int e : elements) {
@@ -52,7 +54,8 @@ void add_nodal_forces(const fe::Model& model, const Eigen::VectorXd& u,
             u_e(2 * i) = u(fe::dof_ux(node));
             u_e(2 * i + 1) = u(fe::dof_uy(node));
         }
-        const Eigen::Matrix<double, 18, 1> f = k.topLeftCorner(n_dofs, n_dofs) * u_e.head(n_dofs);
+        const Eigen::Matrix<double, 18, 1> f =
+            weight(e) * (k.topLeftCorner(n_dofs, n_dofs) * u_e.head(n_dofs));
         for (int i = 0; i < n; ++i) {
             const int node = el.nodes[static_cast<size_t>(i)];
             if (!cut[static_cast<size_t>(node)]) continue;
@@ -88,7 +91,8 @@ std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
         }
         body.resize(static_cast<size_t>(n_elements));
         std::iota(body.begin(), body.end(), 0);
-        add_nodal_forces(model, u, body, cut, centre, force, moment);
+        add_nodal_forces(
+            model, u, body, cut, centre, [](int) { return 1.0; }, force, moment);
         if (force.norm() == 0 && moment == 0 &&
             std::none_of(cut.begin(), cut.end(), [](char c) { return c != 0; }))
             return std::nullopt;
@@ -163,7 +167,17 @@ std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
                  : off_body)[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])] = 1;
     }
     for (size_t i = 0; i < cut.size(); ++i) cut[i] = on_body[i] && off_body[i];
-    add_nodal_forces(model, u, body, cut, centre, force, moment);
+    // Force on the body through the shared nodes: Σ_body k_e u_e there. A
+    // load applied at a shared node itself (a bolt tie on a hole edge that
+    // the line crosses) belongs to neither side; it is shared half and half,
+    // its limit as the mesh is refined, by taking the mean of the body's
+    // view (Σ_body) and the other side's (−Σ_rest):
+    //   F = ½ Σ_shared nodes (Σ_body k_e u_e − Σ_rest k_e u_e).
+    std::vector<int> all(static_cast<size_t>(n_elements));
+    std::iota(all.begin(), all.end(), 0);
+    add_nodal_forces(
+        model, u, all, cut, centre,
+        [&](int e) { return in_body[static_cast<size_t>(e)] ? 0.5 : -0.5; }, force, moment);
     return FreeBodyResultant{normal.dot(force), tangent.dot(force), moment,
                              static_cast<int>(body.size())};
 }

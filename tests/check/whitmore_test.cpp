@@ -55,7 +55,7 @@ TEST_CASE("Whitmore line of a rotated group: same width, at the row nearest the 
     CHECK(std::abs((w.to - w.from).dot(Vector2d(std::cos(a), std::sin(a)))) <= 1e-9);
 }
 
-TEST_CASE("Whitmore line with one row is the gauge of that row; with one bolt it has no width") {
+TEST_CASE("Whitmore line with one row is the gauge of that row, with one bolt it has no width") {
     const auto row = whitmore_line(grid(1, 3, 70, 50, 0.0), 0.0);
     CHECK(row.length == 0.0);
     CHECK(row.width == approx(100.0));
