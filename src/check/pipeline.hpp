@@ -8,6 +8,7 @@
 #include "analysis/results.hpp"
 #include "check/check_table.hpp"
 #include "check/section.hpp"
+#include "check/weld_lines.hpp"
 #include "mesh/mesh.hpp"
 #include "model/connection.hpp"
 
@@ -66,6 +67,9 @@ struct CheckOutcome {
     std::vector<SectionLine> sections;
     std::vector<std::vector<SectionStress>> section_stress; // [case][section], Results::cases order
     std::vector<PeakStress> peaks;                          // per case
+    std::vector<WeldLine> welds;
+    std::vector<std::vector<WeldForces>> weld_forces; // [case][weld line]
+    double element_size = 0;                          // the size the mesher used, mm
     CheckTable table;
     Convergence convergence;
     Timings seconds;
