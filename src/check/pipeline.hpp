@@ -17,11 +17,16 @@
 
 namespace lapwing::check {
 
+struct ReuseCache; // src/check/reuse_cache.hpp (sweeps)
+
 struct CheckOptions {
     // Also solve on a mesh with half the element size everywhere (twice the
     // elements around each hole) and report how every peak and section value
     // moves. Off only for quick looks; the calc sheet says so.
     bool two_mesh = true;
+    // For sweeps: a per-worker cache that reuses the mesh, the sparse pattern
+    // and the fill-reducing ordering when only values change between runs.
+    ReuseCache* cache = nullptr;
 };
 
 // The highest local stresses of one load case, from the recovered nodal and

@@ -82,9 +82,12 @@ WeldForces weld_forces(const WeldLine& line, const mesh::Mesh& mesh,
     for (const mesh::BoundaryEdge& b : mesh.boundary_edges) {
         if (b.tag.kind != geometry::BoundaryKind::outline_edge || b.tag.index != line.edge)
             continue;
+        // Local order first, middle, last; a linear edge stores [first, last, -1].
+        const std::array<int, 3> ordered =
+            quadratic ? b.nodes : std::array<int, 3>{b.nodes[0], -1, b.nodes[1]};
         std::array<int, 3> e{};
         for (int k = 0; k < 3; ++k) {
-            const int node = b.nodes[static_cast<size_t>(k)];
+            const int node = ordered[static_cast<size_t>(k)];
             e[static_cast<size_t>(k)] = -1;
             if (node < 0) continue;
             const auto [it, fresh] = local.emplace(node, static_cast<int>(local.size()));
