@@ -20,11 +20,10 @@ struct FreeBodyResultant {
 // line; the force on it is Σ k_e u_e over its elements at the nodes it
 // shares with the rest. This is the force the other side puts on it, the
 // same as ∫ σ·n t ds for the exact field. A load applied at a shared node
-// (a bolt tie at a hole-edge node on the line) is split half to each side. For a weld line (on the plate's
-// edge) the free body is the whole plate and the force is the reaction at
-// the nodes on the line. Nothing when the line does not separate the plate
-// (a Whitmore line that stops short of the edges). `about` is the distance
-// along the line of the point M is taken about.
+// (a bolt tie at a hole-edge node on the line) is split half to each side. For a weld line (on the
+// plate's edge) the free body is the whole plate and the force is the reaction at the nodes on the
+// line. Nothing when the line does not separate the plate (a Whitmore line that stops short of the
+// edges). `about` is the distance along the line of the point M is taken about.
 std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
                                                      const fe::Model& model,
                                                      const Eigen::VectorXd& u, double about);

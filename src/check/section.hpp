@@ -81,9 +81,9 @@ struct SectionStress {
     double max_membrane_plus_bending = 0; // largest |membrane| + |bending|, MPa
     double max_peak = 0;
     std::vector<ProfilePoint> profile; // ordered by s, for the calc sheet's plots
-    // Stress points outside the mesh (a straight element edge inside a
-    // curved true edge) whose stress was extrapolated from the element next
-    // to them; 0 on quadratic meshes with arcs on the true curve.
+    // Stress points outside the mesh (true material beyond a straight Q4
+    // edge, or beyond a quadratic edge between its nodes on an arc) whose
+    // stress was extrapolated from the element next to them.
     int extrapolated_points = 0;
     // The same resultants from the element nodal forces k_e u_e on one side
     // of the cut (a free body, exact to round-off by equilibrium), when the

@@ -16,7 +16,8 @@ namespace lapwing::check {
 // evaluates the stresses there through the inverse isoparametric map. A
 // point on the plate boundary that the locator misses (weld lines lie on an
 // edge) is nudged 1e-7 of the line's length along ± the line's normal; a
-// point outside a straight-edged element next to a curved true edge takes
+// point of true material outside the mesh next to a curved edge (beyond a
+// straight Q4 chord of an arc, or a quadratic edge between its nodes) takes
 // the extrapolated field of the element of its sub-piece (counted in
 // `extrapolated_points`). Also computes the free-body resultant when the
 // line cuts the plate in two or lies on its edge (free_body.hpp).
