@@ -179,3 +179,38 @@ TEST_CASE("a cut line that misses the plate is bad input naming the line") {
         CHECK(e.diagnostics()[0].message.find("does not cross the plate") != std::string::npos);
     }
 }
+
+TEST_CASE("staggered rows: the net section passes the even lines' bolts; bolted supports follow "
+          "members") {
+    // Lines at y = 40, 100, 160; the middle line sits half a pitch (40 mm)
+    // further along, so the straight section through row 1 at x = 100 meets
+    // two 20 mm holes, not three. The support's group comes after the member's.
+    auto c = test::plate_with({{0, 0}, {500, 0}, {500, 200}, {0, 200}});
+    auto g = test::bolt_group("g", {100, 40}, 0, 2, 3, 80, 60, 20);
+    g.stagger = true;
+    c.bolt_groups.push_back(g);
+    c.bolt_groups.push_back(test::bolt_group("anchor bolts", {400, 70}, 90, 1, 2, 60, 60, 20));
+    c.members.push_back(test::member("tie", "g", 180));
+    model::Support anchor;
+    anchor.name = "anchor";
+    anchor.kind = model::SupportKind::bolted;
+    anchor.bolt_group = "anchor bolts";
+    c.supports.push_back(anchor);
+    const auto lines = check::make_section_lines(c, analysis::plate_layout(c));
+    std::vector<std::string> ids;
+    for (const auto& l : lines) ids.push_back(l.id);
+    CHECK(ids == std::vector<std::string>{"whitmore-tie", "net-tie-row1", "net-tie-row2",
+                                          "net-anchor-row1"});
+    const auto& row1 = find(lines, "net-tie-row1");
+    CHECK(row1.from.x() == test::approx(100.0, 1e-12));
+    CHECK(row1.material_length() == test::approx(200 - 2 * 20, 1e-12));
+    // The support's group runs along +y (angle 90°): its row is the line
+    // y = 70 across the plate, through both of its holes.
+    const auto& anchor_row = find(lines, "net-anchor-row1");
+    CHECK(anchor_row.support == 0);
+    CHECK(anchor_row.from.y() == test::approx(70.0, 1e-12));
+    CHECK(anchor_row.length() == test::approx(500.0, 1e-12));
+    // It crosses the support's two holes (at x = 400 and 340); the member's
+    // holes at y = 40 and 100 lie 30 mm off it.
+    CHECK(anchor_row.material_length() == test::approx(500 - 2 * 20, 1e-12));
+}
