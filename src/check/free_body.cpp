@@ -8,7 +8,6 @@
 
 #include <algorithm>
 #include <cmath>
-#include <map>
 #include <numeric>
 #include <set>
 
@@ -115,33 +114,44 @@ std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
     // Neighbours across element edges (by corner pairs); an edge between
     // centroids on opposite sides is cut when the segment joining the
     // centroids crosses the line between its ends.
-    std::map<std::pair<int, int>, int> first_with_edge;
+    // Element edges by their corner pair, sorted so that an interior
+    // edge's two elements sit next to each other.
+    struct EdgeOf {
+        std::pair<int, int> corners;
+        int element;
+    };
+    std::vector<EdgeOf> edges;
+    edges.reserve(4 * static_cast<size_t>(n_elements));
+    for (int e = 0; e < n_elements; ++e) {
+        const fe::Element& el = model.elements[static_cast<size_t>(e)];
+        for (int j = 0; j < 4; ++j)
+            edges.push_back({std::minmax(el.nodes[static_cast<size_t>(j)],
+                                         el.nodes[static_cast<size_t>((j + 1) % 4)]),
+                             e});
+    }
+    std::sort(edges.begin(), edges.end(), [](const EdgeOf& x, const EdgeOf& y) {
+        return x.corners < y.corners || (x.corners == y.corners && x.element < y.element);
+    });
     std::vector<int> parent(static_cast<size_t>(n_elements));
     std::iota(parent.begin(), parent.end(), 0);
     std::vector<std::pair<int, int>> cut_edges; // (element on −n side, element on +n side)
-    for (int e = 0; e < n_elements; ++e) {
-        const fe::Element& el = model.elements[static_cast<size_t>(e)];
-        for (int j = 0; j < 4; ++j) {
-            const auto key = std::minmax(el.nodes[static_cast<size_t>(j)],
-                                         el.nodes[static_cast<size_t>((j + 1) % 4)]);
-            const auto [it, fresh] = first_with_edge.emplace(key, e);
-            if (fresh) continue;
-            const int o = it->second;
-            const double de = offset[static_cast<size_t>(e)], dn = offset[static_cast<size_t>(o)];
-            bool crosses = false;
-            if ((de > 0) != (dn > 0)) {
-                const double lambda = de / (de - dn);
-                const Vector2d x =
-                    centroid[static_cast<size_t>(e)] +
-                    lambda * (centroid[static_cast<size_t>(o)] - centroid[static_cast<size_t>(e)]);
-                const double s = (x - line.from).dot(tangent);
-                crosses = s >= -tol && s <= length + tol;
-            }
-            if (crosses)
-                cut_edges.push_back(de > 0 ? std::pair{o, e} : std::pair{e, o});
-            else
-                parent[static_cast<size_t>(find_root(parent, e))] = find_root(parent, o);
+    for (size_t k = 0; k + 1 < edges.size(); ++k) {
+        if (edges[k].corners != edges[k + 1].corners) continue;
+        const int e = edges[k].element, o = edges[k + 1].element;
+        const double de = offset[static_cast<size_t>(e)], dn = offset[static_cast<size_t>(o)];
+        bool crosses = false;
+        if ((de > 0) != (dn > 0)) {
+            const double lambda = de / (de - dn);
+            const Vector2d x =
+                centroid[static_cast<size_t>(e)] +
+                lambda * (centroid[static_cast<size_t>(o)] - centroid[static_cast<size_t>(e)]);
+            const double s = (x - line.from).dot(tangent);
+            crosses = s >= -tol && s <= length + tol;
         }
+        if (crosses)
+            cut_edges.push_back(de > 0 ? std::pair{o, e} : std::pair{e, o});
+        else
+            parent[static_cast<size_t>(find_root(parent, e))] = find_root(parent, o);
     }
     if (cut_edges.empty()) return std::nullopt;
     std::set<int> minus_side, plus_side;
