@@ -4,6 +4,7 @@
 // Fu = 65 ksi → Agv = 7.5, Anv = 5.3125, Ant = 1.0625 in², Rn = 276.25 kips)
 // set out in mm, and the other candidate paths checked against lengths
 // worked out by hand on the same plate.
+#include "check/block_shear_check.hpp"
 #include "check/block_shear_paths.hpp"
 #include "core/units.hpp"
 #include "geometry/region_boundary.hpp"
@@ -140,4 +141,46 @@ TEST_CASE("block shear paths: a skewed end edge and a staggered pattern") {
     CHECK(none.paths.empty());
     REQUIRE(none.notes.size() == 1);
     CHECK(none.notes[0].find("rectangular grid") != std::string::npos);
+}
+
+TEST_CASE("block shear check: the weakest loaded path is the REFERENCES block") {
+    // Six bolts share 276.25 kips along +x, φ = 1: the block between the
+    // lines is exactly at capacity (ratio 1, REFERENCES). By hand the
+    // one-sided blocks are stronger: line 1 to the right edge holds half the
+    // load against min(0.6·65·2.65625 + 65·4.78125, 0.6·50·3.75 + 65·4.78125)
+    // = 414.375 kips; line 1 to the left edge (Ubs 0.5) holds all of it
+    // against 0.6·65·2.65625 + 0.5·65·5.84375 = 293.516 kips. Paths across
+    // the axis are not pulled (no force across).
+    const geometry::RegionBoundary b = reference_plate();
+    const BlockShearPaths all = block_shear_paths(centres, {1, 0}, b);
+    const std::vector<Eigen::Vector2d> forces(6, Eigen::Vector2d(276.25 * kip / 6, 0));
+    model::Hole hole;
+    hole.width = hole.length = 13.0 / 16 * in;
+    model::Material m;
+    m.Fy = 50 * ksi;
+    m.Fu = 65 * ksi;
+    model::BlockShearAllowable allow;
+    allow.resistance_factor = 1.0;
+    const std::vector<PathCheck> checks = check_paths(all, forces, t, hole, 0.0, m, allow);
+    const int w = weakest(checks);
+    REQUIRE(w >= 0);
+    CHECK(all.paths[static_cast<size_t>(checks[static_cast<size_t>(w)].path)].id ==
+          "along:between-outer-lines");
+    CHECK(checks[static_cast<size_t>(w)].ratio() == approx(1.0, tight));
+    for (const PathCheck& c : checks) {
+        const std::string& id = all.paths[static_cast<size_t>(c.path)].id;
+        if (id == "along:line1-to-right-edge")
+            CHECK(c.capacity.chosen.value / kip == approx(414.375, tight));
+        if (id == "along:line1-to-left-edge")
+            CHECK(c.capacity.chosen.value / kip == approx(293.515625, tight));
+        if (id.rfind("across", 0) == 0) CHECK(c.demand == 0.0);
+    }
+    // A slot 13/16 × 2 in with its long side across the axis deducts its
+    // length from the tension plane and its width from the shear planes.
+    model::Hole slot = hole;
+    slot.length = 2 * in;
+    slot.direction = model::SlotDirection::across;
+    const HoleWidths hw = hole_widths(slot, 0.0, {1, 0});
+    CHECK(hw.shear == approx(13.0 / 16 * in, tight));
+    CHECK(hw.tension == approx(2 * in, tight));
 }
