@@ -7,6 +7,7 @@
 #include <algorithm>
 #include <cassert>
 #include <cmath>
+#include <numbers>
 
 namespace lapwing::check {
 
@@ -23,6 +24,12 @@ BoltClearances bolt_clearances(const geometry::PlateRegion& region,
     BoltClearances g;
     g.d = d;
     g.d0 = h.shape == geometry::HoleShape::circle ? h.diameter : h.width;
+    if (h.shape == geometry::HoleShape::slot) {
+        // The slot's long side across the force (nearer across than along).
+        const double a = h.angle_deg * std::numbers::pi / 180.0;
+        const Eigen::Vector2d long_side(std::cos(a), std::sin(a));
+        if (std::abs(long_side.dot(u)) < std::sqrt(0.5)) g.hole_factor = 0.6;
+    }
     const geometry::ClearDistance ahead = geometry::clear_distance(boundary, hole, h.centre, u);
     if (ahead.hit.hit) {
         g.lc = ahead.clear;

@@ -18,7 +18,10 @@ namespace lapwing::check {
 //  - ahead a hole: p1 = centre-to-centre distance along the force; ahead an
 //    edge: e1 = centre to that edge along the force;
 //  - across the force, both ways from the centre: the nearest hole gives p2
-//    (its centre's distance across the force), the nearest edge e2.
+//    (its centre's distance across the force), the nearest edge e2;
+//  - hole_factor 0.6 for a slot with its long side across the force (an
+//    oversized round hole cannot be told from the geometry: the caller sets
+//    0.8 from the hole kind).
 // `boundary` is build_region_boundary(region).
 BoltClearances bolt_clearances(const geometry::PlateRegion& region,
                                const geometry::RegionBoundary& boundary, int hole, double d,

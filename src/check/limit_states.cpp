@@ -148,11 +148,13 @@ Capacity bearing_en(const BoltClearances& g, double t, double fu, double fub,
     const double alpha_used = std::max(alpha_b, 0.0);
 
     Capacity c;
-    c.value = k1_used * alpha_used * fu * g.d * t / a.gamma_M2;
+    c.value = g.hole_factor * k1_used * alpha_used * fu * g.d * t / a.gamma_M2;
     c.method = "EN 1993-1-8 Table 3.4 form";
-    c.formula = fmt::format("{}; {}; {}; Fb,Rd = k1·αb·fu·d·t/γM2 = {}·{}·{}·{}·{}/{} = {} N",
-                            alpha_d_text, alpha_b_text, k1_text, num(k1_used), num(alpha_used),
-                            num(fu), num(g.d), num(t), num(a.gamma_M2), num(c.value));
+    const std::string hole = g.hole_factor == 1.0 ? "" : fmt::format("{}·", num(g.hole_factor));
+    c.formula = fmt::format(
+        "{}; {}; {}; Fb,Rd = {}k1·αb·fu·d·t/γM2 = {}{}·{}·{}·{}·{}/{} = {} N", alpha_d_text,
+        alpha_b_text, k1_text, g.hole_factor == 1.0 ? "" : "(hole factor)·", hole, num(k1_used),
+        num(alpha_used), num(fu), num(g.d), num(t), num(a.gamma_M2), num(c.value));
     if (k1 <= 0 || alpha_b <= 0)
         c.formula += " (spacing below the EN 1993-1-8 Table 3.3 minimum: no bearing capacity)";
     return c;

@@ -74,6 +74,9 @@ struct BoltClearances {
     double e2 = no_distance; // hole centre to the nearest edge across the force (an edge bolt)
     double p2 = no_distance; // hole centre to the nearest hole centre across the force
     std::string ahead;       // what lc ends at, e.g. "outline.edge[1]", "holes[3]"
+    // EN 1993-1-8 Table 3.4 footnote (from memory): 0.8 for oversized holes,
+    // 0.6 for a slot whose long side lies across the force, else 1.
+    double hole_factor = 1.0;
 };
 
 // Demand side of a bearing row: the bolt force over the projected area,

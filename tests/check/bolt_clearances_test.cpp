@@ -108,3 +108,24 @@ TEST_CASE("Thornton lengths: from the Whitmore line back along the axis to the s
     CHECK(M.notes.size() == 2);
     CHECK(M.notes[0].find("outline.edge[3]") != std::string::npos);
 }
+
+TEST_CASE("bolt clearances: a slot across the force gets the EN Table 3.4 factor 0.6") {
+    // EN 1993-1-8 Table 3.4 footnote (from memory): bearing in a slot whose
+    // long side is across the force is 0.6 of that in a normal round hole.
+    geometry::PlateRegion r;
+    r.outline = {{{0, 0}}, {{200, 0}}, {{200, 200}}, {{0, 200}}};
+    r.holes = {geometry::Hole::slot({100, 100}, 40, 22, 90)}; // long side along y
+    const auto b = geometry::build_region_boundary(r);
+    const BoltClearances across = bolt_clearances(r, b, 0, 20, {1, 0});
+    CHECK(across.hole_factor == 0.6);
+    CHECK(across.d0 == 22);
+    CHECK(across.lc == approx(100 - 11, tight)); // to x = 200 from the slot's flank x = 111
+    const BoltClearances along = bolt_clearances(r, b, 0, 20, {0, 1});
+    CHECK(along.hole_factor == 1.0);
+    CHECK(along.lc == approx(100 - 20, tight)); // from the slot's tip y = 120
+    // Both ways e1 = e2 = 100 mm: αb = 1 and k1 = 2.5 alike, so only the
+    // hole factor differs.
+    model::BearingAllowable a;
+    CHECK(bearing_en(across, 10, 490, 800, a).value ==
+          approx(0.6 * bearing_en(along, 10, 490, 800, a).value, 1e-12));
+}
