@@ -41,6 +41,7 @@ double gap(const fe::LinkSpring& s, const Eigen::VectorXd& u) {
 void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& model,
                const fe::Solution& s, CaseResult& out) {
     out.u = s.u;
+    out.dof_reactions = s.reactions;
     out.solver_residual = s.relative_residual;
     auto nodal = fe::recover_spr(model, fe::spr_samples(model, s.u));
     nodal.resize(static_cast<size_t>(p.n_plate_nodes));
