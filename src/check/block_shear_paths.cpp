@@ -1,7 +1,7 @@
-// Block shear paths: the bolt grid seen along each pull (lanes parallel to
-// the pull, ranks across it), the blocks bounded by shear planes along
-// lanes and a tension plane across the innermost rank, their lengths to the
-// plate edge by ray casts and their hole counts.
+// Block shear paths: the bolts seen along each pull as lanes (lines parallel
+// to the pull), the blocks bounded by shear planes along lanes and a
+// tension plane through the lanes' innermost bolts, their lengths to the
+// plate edge by ray casts, their hole counts and stagger allowances.
 #include "check/block_shear_paths.hpp"
 
 #include "geometry/ray_cast.hpp"
@@ -10,7 +10,6 @@
 #include <cmath>
 #include <fmt/format.h>
 #include <numeric>
-#include <optional>
 
 namespace lapwing::check {
 
@@ -42,51 +41,33 @@ std::vector<std::vector<int>> cluster(const std::vector<double>& coordinate) {
     return groups;
 }
 
-// The bolt grid seen along a pull `d`: lanes (bolts on one line parallel to
-// d) ordered from right to left of d, ranks ordered along d; at[lane][rank]
-// is the bolt index.
-struct Grid {
-    std::vector<double> lane_offset; // along e = d rotated +90°, mm
-    std::vector<double> rank_offset; // along d, mm
-    std::vector<std::vector<int>> at;
+// The bolts seen along a pull `d`: lanes are the lines of bolts parallel
+// to d, ordered from right to left of d (by their offset along e = d turned
+// +90°); each lane's bolts are ordered along d, so bolts[0] is its innermost
+// (nearest the joint, where a tear-out block starts). A staggered pattern
+// has lanes whose innermost bolts sit at different places along d.
+struct Lane {
+    double across = 0;         // offset along e, mm
+    std::vector<int> bolts;    // indices into the centres, ordered along d
+    std::vector<double> along; // their offsets along d, mm
 };
 
-std::optional<Grid> grid_along(const std::vector<Vec>& centres, const Vec& d) {
+std::vector<Lane> lanes_along(const std::vector<Vec>& centres, const Vec& d) {
     const Vec e(-d.y(), d.x());
-    std::vector<double> along, across;
-    for (const Vec& c : centres) {
-        along.push_back(c.dot(d));
-        across.push_back(c.dot(e));
+    std::vector<double> across;
+    for (const Vec& c : centres) across.push_back(c.dot(e));
+    std::vector<Lane> lanes;
+    for (const auto& group : cluster(across)) {
+        Lane lane;
+        lane.across = across[static_cast<size_t>(group.front())];
+        lane.bolts = group;
+        std::sort(lane.bolts.begin(), lane.bolts.end(), [&](int a, int b) {
+            return centres[static_cast<size_t>(a)].dot(d) < centres[static_cast<size_t>(b)].dot(d);
+        });
+        for (const int b : lane.bolts) lane.along.push_back(centres[static_cast<size_t>(b)].dot(d));
+        lanes.push_back(std::move(lane));
     }
-    const auto lanes = cluster(across);
-    const auto ranks = cluster(along);
-    if (lanes.size() * ranks.size() != centres.size()) return std::nullopt;
-    Grid g;
-    g.at.assign(lanes.size(), std::vector<int>(ranks.size(), -1));
-    std::vector<int> lane_of(centres.size()), rank_of(centres.size());
-    for (size_t l = 0; l < lanes.size(); ++l)
-        for (const int i : lanes[l]) lane_of[static_cast<size_t>(i)] = static_cast<int>(l);
-    for (size_t r = 0; r < ranks.size(); ++r)
-        for (const int i : ranks[r]) rank_of[static_cast<size_t>(i)] = static_cast<int>(r);
-    for (size_t i = 0; i < centres.size(); ++i) {
-        int& slot = g.at[static_cast<size_t>(lane_of[i])][static_cast<size_t>(rank_of[i])];
-        if (slot >= 0) return std::nullopt; // two bolts in one grid cell: not a grid
-        slot = static_cast<int>(i);
-    }
-    for (const auto& l : lanes) g.lane_offset.push_back(across[static_cast<size_t>(l.front())]);
-    for (const auto& r : ranks) g.rank_offset.push_back(along[static_cast<size_t>(r.front())]);
-    return g;
-}
-
-// A plane starting at a hole centre and running `length` along a row of
-// holes at the given offsets from it: half the starting hole plus every
-// further hole whose centre lies short of the plane's end (the trade's
-// rule: whole holes along the plane, half holes where it ends in one).
-double holes_on_plane(double length, const std::vector<double>& further_offsets) {
-    double n = 0.5;
-    for (const double o : further_offsets)
-        if (o < length) n += 1.0;
-    return n;
+    return lanes;
 }
 
 struct Plane {
@@ -103,6 +84,42 @@ Plane to_edge(const geometry::RegionBoundary& boundary, const Vec& from, const V
     return {true, hit.distance, hit.at};
 }
 
+// A shear plane along lane k from its innermost bolt: half that hole, then
+// every further hole of the lane short of the plane's end (whole holes
+// along the plane, half a hole where it ends in one: the trade's rule).
+double shear_holes(const Lane& lane, double length) {
+    double n = 0.5;
+    for (size_t r = 1; r < lane.along.size(); ++r)
+        if (lane.along[r] - lane.along[0] < length) n += 1.0;
+    return n;
+}
+
+// A tension plane through the innermost bolts of lanes `from` to `to` (a
+// zig-zag where the pattern is staggered): its length across the pull (the
+// sum of the gauges g), its holes (half at each end, whole between) and the
+// stagger allowance Σ s²/(4g) for every diagonal step of pitch s (AISC
+// 360-16 §B4.3b; EN 1993-1-1 §6.2.2.2(4) writes it s²/(4p)).
+struct Chain {
+    double across = 0, holes = 0, stagger = 0;
+    std::vector<int> lanes;
+};
+Chain chain(const std::vector<Lane>& lanes, size_t from, size_t to) {
+    Chain c;
+    const int step = to >= from ? 1 : -1;
+    for (size_t l = from;; l = static_cast<size_t>(static_cast<long>(l) + step)) {
+        c.lanes.push_back(static_cast<int>(l));
+        if (l == to) break;
+        const Lane& a = lanes[l];
+        const Lane& b = lanes[static_cast<size_t>(static_cast<long>(l) + step)];
+        const double g = std::abs(b.across - a.across);
+        const double s = std::abs(b.along[0] - a.along[0]);
+        c.across += g;
+        c.holes += 1.0; // a half hole at each end of the step
+        if (s > same_coordinate) c.stagger += s * s / (4.0 * g);
+    }
+    return c;
+}
+
 struct Pull {
     std::string key;   // "along", "across-left", "across-right"
     std::string words; // "along the member axis"
@@ -111,82 +128,87 @@ struct Pull {
 
 void paths_for_pull(const std::vector<Vec>& centres, const Pull& pull,
                     const geometry::RegionBoundary& boundary, BlockShearPaths& out) {
-    const auto grid = grid_along(centres, pull.d);
-    if (!grid) {
-        out.notes.push_back(fmt::format("{}: the bolts do not form a rectangular grid seen {} "
-                                        "(staggered or skewed pattern); no path built",
-                                        pull.key, pull.words));
-        return;
-    }
-    const Grid& g = *grid;
-    const size_t n_lanes = g.at.size(), n_ranks = g.rank_offset.size();
+    const std::vector<Lane> lanes = lanes_along(centres, pull.d);
+    const size_t n_lanes = lanes.size();
     const Vec e(-pull.d.y(), pull.d.x());
-    const auto centre = [&](size_t lane) { return centres[static_cast<size_t>(g.at[lane][0])]; };
-    std::vector<double> further_ranks;
-    for (size_t r = 1; r < n_ranks; ++r)
-        further_ranks.push_back(g.rank_offset[r] - g.rank_offset[0]);
-
-    // Shear plane of each lane: from its innermost bolt along the pull.
-    std::vector<Plane> shear(n_lanes);
-    for (size_t l = 0; l < n_lanes; ++l) {
-        shear[l] = to_edge(boundary, centre(l), pull.d);
-        if (!shear[l].ok)
-            out.notes.push_back(fmt::format("{}: from bolt {} the ray {} leaves no plate edge",
-                                            pull.key, g.at[l][0], pull.words));
-    }
-    const auto bolts_of = [&](size_t first, size_t last) {
+    const auto start = [&](size_t lane) {
+        return centres[static_cast<size_t>(lanes[lane].bolts[0])];
+    };
+    const auto polyline_of = [&](const Chain& c) {
+        std::vector<Vec> line;
+        for (const int l : c.lanes) line.push_back(start(static_cast<size_t>(l)));
+        return line;
+    };
+    const auto bolts_of = [&](const Chain& c) {
         std::vector<int> b;
-        for (size_t l = first; l <= last; ++l)
-            for (size_t r = 0; r < n_ranks; ++r) b.push_back(g.at[l][r]);
+        for (const int l : c.lanes)
+            b.insert(b.end(), lanes[static_cast<size_t>(l)].bolts.begin(),
+                     lanes[static_cast<size_t>(l)].bolts.end());
         std::sort(b.begin(), b.end());
         return b;
     };
 
+    // Shear plane of each lane: from its innermost bolt along the pull.
+    std::vector<Plane> shear(n_lanes);
+    for (size_t l = 0; l < n_lanes; ++l) {
+        shear[l] = to_edge(boundary, start(l), pull.d);
+        if (!shear[l].ok)
+            out.notes.push_back(fmt::format("{}: from bolt {} the line {} meets no plate edge",
+                                            pull.key, lanes[l].bolts[0], pull.words));
+    }
+
     // (a) The block between the outer lanes: two shear planes, tension
-    // across the innermost rank; uniform tension (the usual gusset tear-out).
+    // across through every lane's innermost bolt; uniform tension (the usual
+    // gusset tear-out).
     if (n_lanes >= 2 && shear.front().ok && shear.back().ok) {
+        const Chain c = chain(lanes, 0, n_lanes - 1);
         BlockShearPath p;
         p.id = pull.key + ":between-outer-lines";
         p.name = fmt::format("block between the outer bolt lines, pulled {}", pull.words);
         p.direction = pull.d;
         p.shear_length = shear.front().length + shear.back().length;
-        p.shear_holes = holes_on_plane(shear.front().length, further_ranks) +
-                        holes_on_plane(shear.back().length, further_ranks);
-        p.tension_length = (centre(n_lanes - 1) - centre(0)).norm();
-        p.tension_holes = static_cast<double>(n_lanes - 1); // two halves and the lanes between
+        p.shear_holes = shear_holes(lanes.front(), shear.front().length) +
+                        shear_holes(lanes.back(), shear.back().length);
+        p.tension_length = c.across;
+        p.tension_holes = c.holes;
+        p.tension_stagger = c.stagger;
         p.uniform_tension = true;
-        p.bolts = bolts_of(0, n_lanes - 1);
-        p.polyline = {shear.front().end, centre(0), centre(n_lanes - 1), shear.back().end};
+        p.bolts = bolts_of(c);
+        p.polyline = polyline_of(c);
+        p.polyline.insert(p.polyline.begin(), shear.front().end);
+        p.polyline.push_back(shear.back().end);
         out.paths.push_back(std::move(p));
     }
 
     // (b) One-sided blocks: shear along lane k, tension from lane k's
-    // innermost bolt to the side edge, holding the lanes from k to that side.
+    // innermost bolt through the innermost bolts of the lanes beyond it to
+    // the side edge; the block holds the lanes from k to that side.
     for (const int side : {+1, -1}) {
-        const Vec u = static_cast<double>(side) * e;
         const char* side_word = side > 0 ? "left" : "right";
         for (size_t k = 0; k < n_lanes; ++k) {
             if (!shear[k].ok) continue;
-            const Plane tension = to_edge(boundary, centre(k), u);
-            if (!tension.ok) continue;
-            const size_t first = side > 0 ? k : 0, last = side > 0 ? n_lanes - 1 : k;
-            std::vector<double> further_lanes;
-            for (size_t l = first; l <= last; ++l)
-                if (l != k) further_lanes.push_back(std::abs(g.lane_offset[l] - g.lane_offset[k]));
+            const size_t last = side > 0 ? n_lanes - 1 : 0;
+            const Chain c = chain(lanes, k, last);
+            const Plane rest = to_edge(boundary, start(last), static_cast<double>(side) * e);
+            if (!rest.ok) continue;
             BlockShearPath p;
             p.id = fmt::format("{}:line{}-to-{}-edge", pull.key, k + 1, side_word);
-            p.name = fmt::format("bolt lines {}–{} to the {} edge, pulled {}", first + 1, last + 1,
-                                 side_word, pull.words);
+            p.name =
+                fmt::format("bolt lines {}–{} to the {} edge, pulled {}", std::min(k, last) + 1,
+                            std::max(k, last) + 1, side_word, pull.words);
             p.direction = pull.d;
             p.shear_length = shear[k].length;
-            p.shear_holes = holes_on_plane(shear[k].length, further_ranks);
-            p.tension_length = tension.length;
-            p.tension_holes = holes_on_plane(tension.length, further_lanes);
+            p.shear_holes = shear_holes(lanes[k], shear[k].length);
+            p.tension_length = c.across + rest.length;
+            p.tension_holes = c.holes + 0.5;
+            p.tension_stagger = c.stagger;
             // Several loaded lines across the tension plane: the stress on
             // it is not uniform (AISC 360-16 Commentary §J4.3, Ubs = 0.5).
-            p.uniform_tension = first == last;
-            p.bolts = bolts_of(first, last);
-            p.polyline = {shear[k].end, centre(k), tension.end};
+            p.uniform_tension = c.lanes.size() == 1;
+            p.bolts = bolts_of(c);
+            p.polyline = polyline_of(c);
+            p.polyline.insert(p.polyline.begin(), shear[k].end);
+            p.polyline.push_back(rest.end);
             out.paths.push_back(std::move(p));
         }
     }
@@ -214,7 +236,7 @@ BlockShearAreas areas(const BlockShearPath& p, double t, double shear_hole, doub
     a.Agv = p.shear_length * t;
     a.Anv = (p.shear_length - p.shear_holes * shear_hole) * t;
     a.Agt = p.tension_length * t;
-    a.Ant = (p.tension_length - p.tension_holes * tension_hole) * t;
+    a.Ant = (p.tension_length - p.tension_holes * tension_hole + p.tension_stagger) * t;
     return a;
 }
 

@@ -22,17 +22,25 @@ namespace lapwing::check {
 inline constexpr double aisc_hole_allowance = 25.4 / 16.0; // mm
 
 struct BlockShearPath {
-    std::string id;                  // stable within a group, e.g. "along:between-outer-lines"
-    std::string name;                // words for the calc sheet
-    Eigen::Vector2d direction{1, 0}; // unit: the way the block is pulled out
-    double shear_length = 0;         // total gross length of the shear planes, mm
-    double shear_holes =
-        0; // hole widths deducted along them (half a hole where a plane ends in one)
-    double tension_length = 0;   // gross length of the tension plane, mm
-    double tension_holes = 0;    // hole widths deducted across it
-    bool uniform_tension = true; // false: Ubs = 0.5 (tension plane crosses several loaded lines)
-    std::vector<int> bolts; // indices into the given bolt centres: the bolts on or in the block
-    std::vector<Eigen::Vector2d> polyline; // the tear line, shear and tension planes, mm
+    std::string id;   // stable within a group, e.g. "along:between-outer-lines"
+    std::string name; // words for the calc sheet
+    // Unit vector: the way the block is pulled out.
+    Eigen::Vector2d direction{1, 0};
+    // Total gross length of the shear planes, mm, and the hole widths
+    // deducted along them (half a hole where a plane ends in one).
+    double shear_length = 0;
+    double shear_holes = 0;
+    // The tension plane: its length across the pull, mm, the hole widths
+    // deducted across it, and Σ s²/(4g) added back for staggered steps, mm.
+    double tension_length = 0;
+    double tension_holes = 0;
+    double tension_stagger = 0;
+    // false: Ubs = 0.5 (the tension plane crosses several loaded lines).
+    bool uniform_tension = true;
+    // Indices into the given bolt centres: the bolts on or in the block.
+    std::vector<int> bolts;
+    // The tear line for the figure: shear plane, tension plane, shear plane, mm.
+    std::vector<Eigen::Vector2d> polyline;
 };
 
 struct BlockShearPaths {
@@ -44,13 +52,15 @@ struct BlockShearPaths {
 // the joint (the way a tension member pulls its bolts); `centres` are the
 // group's bolt centres (mm). Built for the pull along the axis and, with
 // `across`, for pulls both ways across it (a member shear or a bolt force
-// with a component across the axis). The bolts must form a rectangular
-// grid seen along each pull; a staggered pattern gives a note instead.
+// with a component across the axis). Staggered patterns give zig-zag
+// tension planes through each line's innermost bolt, with the s²/(4g)
+// allowance per diagonal step.
 BlockShearPaths block_shear_paths(const std::vector<Eigen::Vector2d>& centres,
                                   const Eigen::Vector2d& axis,
                                   const geometry::RegionBoundary& boundary, bool across = true);
 
-// The path's areas for plate thickness t, deducting `shear_hole` (the
+// The path's areas for plate thickness t (Ant with the stagger allowance
+// added back, Agt the tension plane's length across the pull), deducting `shear_hole` (the
 // hole's size along the shear planes) and `tension_hole` (across the
 // tension plane) per hole width counted, e.g. d0 + aisc_hole_allowance for
 // the AISC form, d0 for the EN form.

@@ -122,7 +122,7 @@ TEST_CASE("block shear paths: pulled across the member axis (shear across, tensi
     CHECK(q.polyline[1].y() / in == approx(3, tight));
 }
 
-TEST_CASE("block shear paths: a skewed end edge and a staggered pattern") {
+TEST_CASE("block shear paths: a skewed end edge") {
     // The end edge cut on a slope, x = 11.5 in + y/3: line 1 (y = 0) still
     // ends at x = 11.5 in (shear 7.5 in), line 2 (y = 3 in) at x = 12.5 in
     // (shear 8.5 in); together 16 in (plane geometry, by hand).
@@ -134,13 +134,7 @@ TEST_CASE("block shear paths: a skewed end edge and a staggered pattern") {
     const auto boundary = geometry::build_region_boundary(r);
     const BlockShearPaths all = block_shear_paths(centres, {1, 0}, boundary, false);
     CHECK(find(all, "along:between-outer-lines").shear_length / in == approx(16, 1e-12));
-    // Staggered (odd line shifted half a pitch): no grid, a note, no path.
-    std::vector<Eigen::Vector2d> staggered = centres;
-    for (size_t i = 1; i < staggered.size(); i += 2) staggered[i].x() += 1.5 * in;
-    const BlockShearPaths none = block_shear_paths(staggered, {1, 0}, boundary, false);
-    CHECK(none.paths.empty());
-    REQUIRE(none.notes.size() == 1);
-    CHECK(none.notes[0].find("rectangular grid") != std::string::npos);
+    CHECK(find(all, "along:between-outer-lines").shear_holes == 5.0);
 }
 
 TEST_CASE("block shear check: the weakest loaded path is the REFERENCES block") {
@@ -183,4 +177,50 @@ TEST_CASE("block shear check: the weakest loaded path is the REFERENCES block") 
     const HoleWidths hw = hole_widths(slot, 0.0, {1, 0});
     CHECK(hw.shear == approx(13.0 / 16 * in, tight));
     CHECK(hw.tension == approx(2 * in, tight));
+}
+
+TEST_CASE("block shear paths: a staggered pattern gives a zig-zag tension plane with s²/4g") {
+    // Hand example (this project), metric: 3 lines at g = 40 mm (y = 25, 65,
+    // 105), 3 rows at p = 60 mm, the middle line shifted half a pitch
+    // (x = 70, 130, 190; the outer lines at x = 40, 100, 160); end edge
+    // x = 230, side edges y = 0 and 130; d0 = 22, t = 10, pulled along +x.
+    std::vector<Eigen::Vector2d> c;
+    for (const double x : {40.0, 100.0, 160.0})
+        c.insert(c.end(), {{x, 25}, {x + 30, 65}, {x, 105}});
+    geometry::PlateRegion r;
+    r.outline = {{{-100, 0}}, {{230, 0}}, {{230, 130}}, {{-100, 130}}};
+    for (const auto& p : c) r.holes.push_back(geometry::Hole::circle(p, 22));
+    const BlockShearPaths all =
+        block_shear_paths(c, {1, 0}, geometry::build_region_boundary(r), false);
+    CHECK(all.notes.empty());
+    // Between the outer lines: shear planes x = 40 → 230, 190 mm with
+    // 0.5 + 2 holes each; tension zig-zag (40, 25) → (70, 65) → (40, 105):
+    // across 80 mm, 2 holes, stagger 2·30²/(4·40) = 11.25 mm (AISC 360-16
+    // §B4.3b). Net tension 80 − 44 + 11.25 = 47.25 mm → Ant = 472.5 mm²;
+    // Anv = (380 − 5·22)·10 = 2700 mm².
+    const BlockShearPath& p = find(all, "along:between-outer-lines");
+    CHECK(p.tension_length == approx(80, tight));
+    CHECK(p.tension_holes == 2.0);
+    CHECK(p.tension_stagger == approx(11.25, tight));
+    CHECK(p.bolts.size() == 9);
+    CHECK(p.polyline.size() == 5);
+    const BlockShearAreas a = areas(p, 10, 22, 22);
+    CHECK(a.Ant == approx(472.5, tight));
+    CHECK(a.Anv == approx(2700, tight));
+    // EN 1993-1-8 §3.10.2 (S355, γM0 = 1.0, γM2 = 1.25), by hand:
+    // 490·472.5/1.25 + 355·2700/√3 = 185 220 + 958 500/1.7320508
+    // = 185 220 + 553 390.2 = 738 610.2 N.
+    const double en = block_shear_en(a, 355, 490, 1.0, 1.0, 1.25).value;
+    CHECK(std::abs(en - 738610.2) <= 0.05);
+    // Middle line to the left edge: shear x = 70 → 230 (160 mm, 2.5 holes);
+    // tension (70, 65) → (40, 105) then up to y = 130: 40 + 25 = 65 mm,
+    // 1.5 holes, stagger 30²/160 = 5.625 mm; two lines held: not uniform.
+    const BlockShearPath& q = find(all, "along:line2-to-left-edge");
+    CHECK(q.shear_length == approx(160, tight));
+    CHECK(q.shear_holes == 2.5);
+    CHECK(q.tension_length == approx(65, tight));
+    CHECK(q.tension_holes == 1.5);
+    CHECK(q.tension_stagger == approx(5.625, tight));
+    CHECK(!q.uniform_tension);
+    CHECK(q.bolts.size() == 6);
 }
