@@ -15,15 +15,18 @@ BoltClearances bolt_clearances(const geometry::PlateRegion& region,
                                const geometry::RegionBoundary& boundary, int hole, double d,
                                const Eigen::Vector2d& force) {
     assert(hole >= 0 && hole < static_cast<int>(region.holes.size()));
-    assert(force.norm() > 0);
     const geometry::Hole& h = region.holes[static_cast<size_t>(hole)];
+    BoltClearances g;
+    g.d = d;
+    g.d0 = h.shape == geometry::HoleShape::circle ? h.diameter : h.width;
+    if (!(force.norm() > 0)) {
+        g.ahead = "no force on the bolt"; // lc = 0: no tear-out capacity is claimed
+        return g;
+    }
     const Eigen::Vector2d u = force.normalized();
     const Eigen::Vector2d across(-u.y(), u.x());
     const auto centre_of = [&](int j) { return region.holes[static_cast<size_t>(j)].centre; };
 
-    BoltClearances g;
-    g.d = d;
-    g.d0 = h.shape == geometry::HoleShape::circle ? h.diameter : h.width;
     if (h.shape == geometry::HoleShape::slot) {
         // The slot's long side across the force (nearer across than along).
         const double a = h.angle_deg * std::numbers::pi / 180.0;

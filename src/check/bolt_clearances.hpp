@@ -13,7 +13,8 @@ namespace lapwing::check {
 
 // Bolt in hole `hole` of `region` (its centre is the hole's), nominal
 // diameter `d`, carrying a force along `force` (the force the bolt puts on
-// the plate; only its direction is used, and it must not be zero).
+// the plate; only its direction is used; a zero force gives lc = 0 and
+// ahead = "no force on the bolt").
 //  - lc: from the hole's edge along the force to the next hole or edge;
 //  - ahead a hole: p1 = centre-to-centre distance along the force; ahead an
 //    edge: e1 = centre to that edge along the force;

@@ -127,7 +127,8 @@ struct Slenderness {
     double Fe = 0;        // elastic buckling stress, MPa
     std::string lengths;  // "L = (L1 + L2 + L3)/3 = (…)/3 = … mm"
 };
-// `lengths` holds the one to three lengths that reach the support (mm).
+// `lengths` holds the one to three lengths that reach the support (mm);
+// none throws lapwing::AnalysisError.
 Slenderness thornton_slenderness(const std::vector<double>& lengths, double t, double K, double E);
 
 // AISC 360-16 §E3 column curve on the Whitmore area Lw·t:

@@ -1,6 +1,7 @@
 // Whitmore-section buckling (Thornton 1984): the slenderness of the
 // equivalent column and the two published column curves applied to it.
 #include "check/limit_states.hpp"
+#include "core/error.hpp"
 
 #include <algorithm>
 #include <cassert>
@@ -17,7 +18,12 @@ std::string num(double x) {
 } // namespace
 
 Slenderness thornton_slenderness(const std::vector<double>& lengths, double t, double K, double E) {
-    assert(!lengths.empty() && lengths.size() <= 3);
+    // BucklingLengths::reaching can be empty (no line reaches a support):
+    // the caller must not ask for a column then; say so rather than divide by 0.
+    if (lengths.empty())
+        throw AnalysisError("Whitmore buckling (Thornton 1984): no length from the Whitmore line "
+                            "reaches a supported edge");
+    assert(lengths.size() <= 3);
     Slenderness s;
     double sum = 0;
     std::string terms;

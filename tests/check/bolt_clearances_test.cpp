@@ -55,6 +55,10 @@ TEST_CASE("bolt clearances: the REFERENCES tear-out distances, from the plate") 
     a.resistance_factor = 1.0;
     CHECK(bearing_tearout_aisc(end, 0.5 * in, 65 * ksi, a).value / kip == approx(42.65625, 1e-12));
     CHECK(bearing_tearout_aisc(inner, 0.5 * in, 65 * ksi, a).value / kip == approx(58.5, 1e-12));
+    // No force: no direction, so no clear distance is claimed.
+    const BoltClearances idle = bolt_clearances(r, b, 4, 0.75 * in, {0, 0});
+    CHECK(idle.lc == 0.0);
+    CHECK(idle.ahead == "no force on the bolt");
     // A force turned 90° (towards +y) sees the other line: lc = 3 − 13/16.
     CHECK(bolt_clearances(r, b, 4, 0.75 * in, {0, 1}).lc / in == approx(2.1875, tight));
 }

@@ -5,6 +5,7 @@
 // (no published worked example is used: none is recalled reliably enough to
 // quote its numbers).
 #include "check/limit_states.hpp"
+#include "core/error.hpp"
 #include "core/units.hpp"
 #include "support/approx.hpp"
 
@@ -213,6 +214,8 @@ TEST_CASE("Thornton slenderness: the REFERENCES example, and both column curves"
     // A stocky strip (λ̄ ≤ 0.2) gets χ = 1: the squash load.
     const Slenderness stocky = thornton_slenderness({5}, 20, 0.65, 200000);
     CHECK(buckling_en(stocky, 355, 100, 20, 1.0).value == approx(355.0 * 100 * 20, 1e-12));
+    // No length reaching the support: a clear error, not a division by zero.
+    CHECK_THROWS_AS(thornton_slenderness({}, 20, 0.65, 200000), AnalysisError);
 }
 
 TEST_CASE("Whitmore yielding and section capacities: the user's allowable times the area") {
