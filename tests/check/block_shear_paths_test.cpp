@@ -224,3 +224,25 @@ TEST_CASE("block shear paths: a staggered pattern gives a zig-zag tension plane 
     CHECK(!q.uniform_tension);
     CHECK(q.bolts.size() == 6);
 }
+
+TEST_CASE("block shear paths: the EN 1993-1-8 hand example set out as a plate") {
+    // limit_states_test's hand example: 2 lines at p2 = 70 (y = 40, 110),
+    // 3 rows at p1 = 70 (x = 0, 70, 140), e1 = 40 to the end edge x = 180;
+    // d0 = 22, t = 10, S355. The block between the lines must give
+    // Anv = 2·(180 − 2.5·22)·10 = 2500 mm², Ant = (70 − 22)·10 = 480 mm²
+    // and Veff,1,Rd = 700 558.4 N (Eq. 3.9, γM0 = 1.0, γM2 = 1.25).
+    std::vector<Eigen::Vector2d> c;
+    geometry::PlateRegion r;
+    r.outline = {{{-300, 0}}, {{180, 0}}, {{180, 150}}, {{-300, 150}}};
+    for (const double x : {0.0, 70.0, 140.0})
+        for (const double y : {40.0, 110.0}) {
+            c.emplace_back(x, y);
+            r.holes.push_back(geometry::Hole::circle({x, y}, 22));
+        }
+    const BlockShearPaths all =
+        block_shear_paths(c, {1, 0}, geometry::build_region_boundary(r), false);
+    const BlockShearAreas a = areas(find(all, "along:between-outer-lines"), 10, 22, 22);
+    CHECK(a.Anv == approx(2500, tight));
+    CHECK(a.Ant == approx(480, tight));
+    CHECK(std::abs(block_shear_en(a, 355, 490, 1.0, 1.0, 1.25).value - 700558.4) <= 0.05);
+}
