@@ -88,6 +88,9 @@ CheckTable make_table(std::vector<CheckRow> rows) {
         if (r.capacity > 0 && std::isfinite(r.capacity) && std::isfinite(r.demand)) {
             r.ratio = std::abs(r.demand) / r.capacity;
             r.status = r.ratio > 1.0 ? Status::fail : Status::pass;
+        } else if (r.capacity_required && std::abs(r.demand) > 0) {
+            r.ratio = no_capacity_ratio;
+            r.status = Status::fail;
         } else {
             r.ratio = 0;
             r.status = Status::info;

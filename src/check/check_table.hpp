@@ -48,6 +48,11 @@ struct CheckRow {
     double capacity = 0;                  // internal units; 0 with Status::info
     double ratio = 0;                     // demand / capacity
     Status status = Status::info;
+    // A published form whose capacity comes out as zero (an edge distance
+    // or spacing below the form's minimum) fails rather than being shown
+    // for information; the ratio is then no_capacity_ratio.
+    bool capacity_required = false;
+    std::string note; // e.g. the other published form's value, for information
 };
 
 struct CheckTable {
@@ -59,6 +64,10 @@ struct CheckTable {
     double max_ratio() const;
     int governing_in(Family family) const;
 };
+
+// The ratio shown for a required capacity of zero (a finite stand-in for ∞,
+// so that tables and JSON stay plain numbers).
+inline constexpr double no_capacity_ratio = 999.0;
 
 // Ratios, statuses and governing rows from demands and capacities. A row
 // with capacity ≤ 0 is Status::info. Ties go to the first row.

@@ -3,6 +3,9 @@
 
 #include "analysis/analyse.hpp"
 #include "check/peaks.hpp"
+#include "check/section_integral.hpp"
+#include "check/section_lines.hpp"
+#include "fe/point_locator.hpp"
 #include "mesh/size_field.hpp"
 
 #include <algorithm>
@@ -46,6 +49,11 @@ std::vector<std::vector<int>> held_nodes(const model::Connection& c, const mesh:
 
 } // namespace
 
+std::map<std::string, double> case_factors(const model::Connection& c, size_t k) {
+    if (k < c.load_cases.size()) return {{c.load_cases[k].name, 1.0}};
+    return c.combinations.at(k - c.load_cases.size()).factors;
+}
+
 Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settings) {
     Evaluation e;
     auto start = std::chrono::steady_clock::now();
@@ -61,6 +69,8 @@ Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settin
 
     start = std::chrono::steady_clock::now();
     const analysis::FeProblem& p = e.results.problem;
+    e.sections = make_section_lines(c, e.layout);
+    const fe::PointLocator locator(p.model);
     e.welds = weld_lines(c);
     const auto held = held_nodes(c, e.mesh, p, e.welds);
     for (const analysis::CaseResult& r : e.results.cases) {
@@ -69,7 +79,13 @@ Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settin
         for (size_t w = 0; w < e.welds.size(); ++w)
             wf.push_back(weld_forces(e.welds[w], e.mesh, r.dof_reactions, held[w]));
         e.weld_forces.push_back(std::move(wf));
-        e.section_stress.emplace_back();
+        std::vector<SectionStress> ss;
+        for (size_t s = 0; s < e.sections.size(); ++s) {
+            ss.push_back(
+                integrate_section(e.sections[s], p.model, locator, r.u, c.plate.thickness));
+            ss.back().section = static_cast<int>(s);
+        }
+        e.section_stress.push_back(std::move(ss));
     }
     e.seconds_measure = seconds_since(start);
     return e;

@@ -6,6 +6,9 @@
 #include "check/pipeline.hpp"
 #include "check/weld_lines.hpp"
 
+#include <map>
+#include <string>
+
 namespace lapwing::check {
 
 struct Evaluation {
@@ -26,5 +29,14 @@ Evaluation evaluate(const model::Connection& connection, const mesh::MeshSetting
 
 // Rows from the stress field: peaks, section stresses, welds.
 std::vector<CheckRow> stress_rows(const model::Connection& connection, const Evaluation& e);
+
+// Rows of the classical limit states on this geometry with the computed
+// forces: bolt bearing and tear-out, block shear, Whitmore yielding and
+// buckling, gross and net sections (classical_rows.cpp).
+std::vector<CheckRow> classical_rows(const model::Connection& connection, const Evaluation& e);
+
+// The load-case factors of Results::cases[k]: a load case alone, or a
+// combination's factors.
+std::map<std::string, double> case_factors(const model::Connection& connection, size_t k);
 
 } // namespace lapwing::check

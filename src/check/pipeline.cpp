@@ -6,6 +6,7 @@
 #include "check/evaluation.hpp"
 #include "mesh/size_field.hpp"
 
+#include <algorithm>
 #include <chrono>
 #include <cmath>
 #include <fmt/format.h>
@@ -13,8 +14,8 @@
 namespace lapwing::check {
 
 double ConvergenceRow::change() const {
-    if (fine == 0 && coarse == 0) return 0;
-    return (fine - coarse) / std::max(std::abs(fine), std::abs(coarse));
+    const double scale = std::max({std::abs(fine), std::abs(coarse), floor});
+    return scale > 0 ? (fine - coarse) / scale : 0.0;
 }
 
 double Convergence::largest_change() const {
@@ -34,6 +35,25 @@ void compare(const Evaluation& coarse, const Evaluation& fine, Convergence& out)
                             fine.peaks[k].von_mises});
         out.rows.push_back({"largest principal stress", lc, Quantity::stress,
                             coarse.peaks[k].max_principal, fine.peaks[k].max_principal});
+        for (size_t s = 0; s < coarse.sections.size() && s < fine.sections.size(); ++s) {
+            const SectionStress& a = coarse.section_stress[k][s];
+            const SectionStress& b = fine.section_stress[k][s];
+            const std::string& id = coarse.sections[s].id;
+            out.rows.push_back(
+                {fmt::format("normal force N, {}", id), lc, Quantity::force, a.N, b.N});
+            out.rows.push_back({fmt::format("shear force V, {}", id), lc, Quantity::force, a.V,
+                                b.V});
+            out.rows.push_back({fmt::format("membrane stress, {}", id), lc, Quantity::stress,
+                                a.max_membrane, b.max_membrane});
+            out.rows.push_back({fmt::format("membrane + bending, {}", id), lc, Quantity::stress,
+                                a.max_membrane_plus_bending, b.max_membrane_plus_bending});
+        }
+        for (size_t k2 = 0;
+             k2 < coarse.results.cases[k].bolts.size() && k2 < fine.results.cases[k].bolts.size();
+             ++k2)
+            out.rows.push_back({fmt::format("bolt force, bolt {}", k2), lc, Quantity::force,
+                                coarse.results.cases[k].bolts[k2].magnitude,
+                                fine.results.cases[k].bolts[k2].magnitude});
         for (size_t w = 0; w < coarse.welds.size(); ++w) {
             const WeldForces& a = coarse.weld_forces[k][w];
             const WeldForces& b = fine.weld_forces[k][w];
@@ -53,7 +73,11 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     out.connection = c;
     const auto start = std::chrono::steady_clock::now();
     Evaluation e = evaluate(c, analysis::mesh_settings(c));
-    out.table = make_table(stress_rows(c, e));
+    std::vector<CheckRow> rows = stress_rows(c, e);
+    std::vector<CheckRow> classical = classical_rows(c, e);
+    rows.insert(rows.end(), std::make_move_iterator(classical.begin()),
+                std::make_move_iterator(classical.end()));
+    out.table = make_table(std::move(rows));
     out.seconds.mesh = e.seconds_mesh;
     out.seconds.analysis = e.seconds_analysis;
 
@@ -74,6 +98,13 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
         cv.coarse_dofs = e.results.problem.model.n_dofs();
         cv.fine_dofs = f.results.problem.model.n_dofs();
         compare(e, f, cv);
+        for (ConvergenceRow& r : cv.rows) {
+            double largest = 0;
+            for (const ConvergenceRow& o : cv.rows)
+                if (o.unit == r.unit && o.load_case == r.load_case)
+                    largest = std::max({largest, std::abs(o.coarse), std::abs(o.fine)});
+            r.floor = 0.1 * largest;
+        }
         out.seconds.fine_mesh = f.seconds_mesh + f.seconds_analysis + f.seconds_measure;
     }
     out.layout = std::move(e.layout);

@@ -47,7 +47,12 @@ struct ConvergenceRow {
     std::string load_case;
     Quantity unit = Quantity::stress;
     double coarse = 0, fine = 0;
-    double change() const; // (fine − coarse) / |fine|, 0 when both vanish
+    // Values this small are not compared relative to themselves: a shear
+    // force near zero on a line in tension would show a meaningless 100 %.
+    // Set to 10 % of the largest value of the same unit in the same case.
+    double floor = 0;
+    // (fine − coarse) / max(|fine|, |coarse|, floor); 0 when all vanish.
+    double change() const;
 };
 
 struct Convergence {

@@ -45,6 +45,25 @@ std::vector<CheckRow> stress_rows(const model::Connection& c, const Evaluation& 
                                 "peak von Mises stress (local, mesh dependent)", p.near, lc,
                                 "peak_von_mises", al.peak_von_mises, Quantity::stress,
                                 p.von_mises));
+        // Sections: linearized stresses against the user's allowables; a
+        // family left out of [allowables] gives no rows (the profiles and
+        // resultants are still on the calc sheet).
+        for (size_t s = 0; s < e.sections.size(); ++s) {
+            const SectionLine& line = e.sections[s];
+            const SectionStress& ss = e.section_stress[k][s];
+            const auto add = [&](const char* id, const char* what, const char* key,
+                                 const model::Allowable& a, double demand) {
+                if (!a.given) return;
+                rows.push_back(user_row(fmt::format("{}:{}:{}", id, line.id, lc), Family::section,
+                                        what, line.label, lc, key, a, Quantity::stress, demand));
+            };
+            add("membrane", "membrane stress (linearized, largest over the pieces)",
+                "section_membrane", al.section_membrane, ss.max_membrane);
+            add("membrane-bending", "membrane + bending stress (linearized)",
+                "membrane_plus_bending", al.membrane_plus_bending, ss.max_membrane_plus_bending);
+            add("shear", "average shear stress along the line", "section_shear", al.section_shear,
+                std::abs(ss.average_shear));
+        }
         for (size_t w = 0; w < e.welds.size(); ++w) {
             const WeldLine& line = e.welds[w];
             const WeldForces& f = e.weld_forces[k][w];

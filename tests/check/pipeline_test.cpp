@@ -1,0 +1,58 @@
+// The whole check on shipped templates: the table's rows and the two-mesh
+// evidence. Converged quantities (bolt forces, section resultants) must move
+// little when the element size is halved; local peaks may move more and are
+// reported, not held.
+#include "check/pipeline.hpp"
+#include "input/load_connection.hpp"
+
+#include <algorithm>
+#include <doctest/doctest.h>
+#include <fstream>
+#include <sstream>
+
+using namespace lapwing;
+
+namespace {
+
+model::Connection load_template(const std::string& name, const std::vector<std::string>& sets) {
+    const std::string path = std::string(LAPWING_SOURCE_DIR) + "/templates/" + name;
+    std::ifstream in(path);
+    std::stringstream text;
+    text << in.rdbuf();
+    return input::load_connection(text.str(), path, sets);
+}
+
+} // namespace
+
+TEST_CASE("check pipeline: every family of the web splice, and convergence of bolt forces and "
+          "section forces within 2 % on halving the element size") {
+    const model::Connection c = load_template("web-splice.toml", {});
+    const check::CheckOutcome o = check::check_connection(c, {});
+    REQUIRE(o.convergence.done);
+    CHECK(o.convergence.fine_elements > 2 * o.convergence.coarse_elements);
+    for (const check::Family f : {check::Family::peak_stress, check::Family::section,
+                                  check::Family::bearing, check::Family::block_shear,
+                                  check::Family::net_section})
+        CHECK_MESSAGE(o.table.governing_in(f) >= 0, check::word(f));
+    for (const check::CheckRow& r : o.table.rows) {
+        CHECK(std::isfinite(r.demand));
+        CHECK(std::isfinite(r.ratio));
+        CHECK(!r.method.empty());
+    }
+    // Mesh convergence (common practice: a converged quantity changes little
+    // when the mesh is refined). Bolt forces and section forces are
+    // integral quantities and converge fast; peaks are local.
+    std::vector<check::ConvergenceRow> rows = o.convergence.rows;
+    std::sort(rows.begin(), rows.end(), [](const auto& a, const auto& b) {
+        return std::abs(a.change()) > std::abs(b.change());
+    });
+    for (size_t i = 0; i < std::min<size_t>(5, rows.size()); ++i)
+        MESSAGE(rows[i].quantity << " (" << rows[i].load_case << "): " << rows[i].coarse << " → "
+                                 << rows[i].fine << ", " << 100 * rows[i].change() << " %");
+    // Section forces are compared against the largest force of the case (the
+    // floor), so a near-zero N on a line in shear does not count as 100 %.
+    for (const check::ConvergenceRow& r : o.convergence.rows)
+        if (r.quantity.rfind("bolt force", 0) == 0 || r.quantity.rfind("normal force N", 0) == 0 ||
+            r.quantity.rfind("shear force V", 0) == 0)
+            CHECK_MESSAGE(std::abs(r.change()) < 0.02, r.quantity);
+}
