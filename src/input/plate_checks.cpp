@@ -1,12 +1,16 @@
-// Geometry checks that need only the input: the outline is a simple
-// counter-clockwise polygon whose corner finishes fit, cut-outs lie inside
-// it, and every hole lies inside the plate, clear of the edges, the cut-outs
-// and the other holes. (Full region validation for the mesher is geometry/'s.)
+// Geometry checks on reading: the outline is a simple counter-clockwise
+// polygon whose corner finishes fit, every hole lies inside the plate, clear
+// of the edges, the cut-outs and the other holes; then the region the mesher
+// will see (outline minus cut-outs, which may cross the outline as copes and
+// notches) goes through geometry::validate, whose findings are reported here
+// with the template's file, line and key.
+#include "geometry/region_boundary.hpp"
 #include "input/sections.hpp"
 #include "model/bolts.hpp"
 
 #include <algorithm>
 #include <cmath>
+#include <cstdio>
 #include <fmt/format.h>
 #include <numbers>
 
@@ -131,6 +135,89 @@ HoleShape hole_shape(const model::BoltGroup& g, Point centre) {
     return {centre - d, centre + d, 0.5 * g.hole.width};
 }
 
+// The plate as the mesher's region (as analysis::plate_layout builds it):
+// the outline with its corner finishes, the cut-outs, one hole per bolt.
+// `bolts[h]` is the group and bolt of hole h.
+geometry::PlateRegion plate_region(const model::Connection& c,
+                                   std::vector<std::pair<size_t, model::BoltPosition>>& bolts) {
+    geometry::PlateRegion region;
+    for (const model::Corner& corner : c.plate.outline) {
+        geometry::OutlineVertex v;
+        v.point = {corner.at.x, corner.at.y};
+        if (corner.kind == model::CornerKind::chamfer) v.chamfer = corner.size;
+        if (corner.kind == model::CornerKind::fillet) v.fillet_radius = corner.size;
+        region.outline.push_back(v);
+    }
+    for (const model::Cutout& cut : c.plate.cutouts) {
+        geometry::Polygon p;
+        for (const Point& q : cut.points) p.points.emplace_back(q.x, q.y);
+        region.cutouts.push_back(p);
+    }
+    for (size_t g = 0; g < c.bolt_groups.size(); ++g) {
+        const model::BoltGroup& group = c.bolt_groups[g];
+        for (const model::BoltPosition& b : model::bolt_positions(group)) {
+            const geometry::Point centre(b.centre.x, b.centre.y);
+            const model::Hole& h = group.hole;
+            if (h.length > h.width) {
+                const double angle =
+                    group.angle + (h.direction == model::SlotDirection::across ? 90.0 : 0.0);
+                region.holes.push_back(geometry::Hole::slot(centre, h.length, h.width, angle));
+            } else {
+                region.holes.push_back(geometry::Hole::circle(centre, h.width));
+            }
+            bolts.emplace_back(g, b);
+        }
+    }
+    return region;
+}
+
+// What remains of the plate once the cut-outs are removed: one piece with
+// area, every corner finish still on a corner, every hole clear of every
+// edge by the minimum ligament. geometry::validate decides (so a template
+// that validates also meshes); its findings are placed on the template's
+// lines here. Its lengths are in mm, which the message says when the
+// template works in other units.
+void check_region(const model::Connection& connection, const PlateOrigins& origins,
+                  Context& context) {
+    std::vector<std::pair<size_t, model::BoltPosition>> bolts;
+    const geometry::PlateRegion region = plate_region(connection, bolts);
+    try {
+        geometry::validate(region);
+    } catch (const InputError& e) {
+        const bool in_mm = unit_label(Quantity::length, context.units) == "mm";
+        for (const Diagnostic& d : e.diagnostics()) {
+            const std::string note = in_mm ? "" : " (lengths in mm)";
+            int index = -1;
+            if (std::sscanf(d.key_path.c_str(), "cutouts[%d]", &index) == 1 && index >= 0 &&
+                static_cast<size_t>(index) < origins.cutouts.size()) {
+                std::string why = d.message;
+                if (why.find("separate pieces") != std::string::npos)
+                    why += ": what remains of the plate must be one piece";
+                else if (why.find("removes nothing") != std::string::npos)
+                    why += " (a cut-out may cross the outline, as a cope or notch does, but must "
+                           "overlap the plate)";
+                else if (why.find("whole plate") != std::string::npos)
+                    why += ": nothing is left to analyse";
+                context.report(origins.cutouts[static_cast<size_t>(index)],
+                               fmt::format("plate.cutout[{}]", index), why + note);
+            } else if (std::sscanf(d.key_path.c_str(), "outline[%d]", &index) == 1 && index >= 0 &&
+                       static_cast<size_t>(index) < origins.corners.size()) {
+                context.report(origins.corners[static_cast<size_t>(index)],
+                               fmt::format("plate.outline[{}]", index), d.message + note);
+            } else if (std::sscanf(d.key_path.c_str(), "holes[%d]", &index) == 1 && index >= 0 &&
+                       static_cast<size_t>(index) < bolts.size()) {
+                const auto& [g, b] = bolts[static_cast<size_t>(index)];
+                context.report(
+                    origins.bolt_groups[g], fmt::format("bolt_group[{}]", g),
+                    fmt::format("(\"{}\"): the hole of the bolt at row {}, line {}: {}{}",
+                                connection.bolt_groups[g].name, b.row, b.line, d.message, note));
+            } else {
+                context.report(origins.plate, "plate", d.key_path + " " + d.message + note);
+            }
+        }
+    }
+}
+
 } // namespace
 
 void check_plate_geometry(const model::Connection& connection, const PlateOrigins& origins,
@@ -139,6 +226,10 @@ void check_plate_geometry(const model::Connection& connection, const PlateOrigin
     const size_t n = plate.outline.size();
     const auto mm = [&](double v) { return from_internal(v, Quantity::length, context.units); };
     const auto unit = unit_label(Quantity::length, context.units);
+    // The plate the mesher and the analysis see keeps this much between a
+    // hole and any edge (geometry::PlateRegion's default).
+    const double min_ligament = geometry::PlateRegion{}.min_ligament;
+    const size_t problems_before = context.problems.size();
 
     // Outline: no zero-length segment, no self-crossing, counter-clockwise.
     bool outline_ok = true;
@@ -195,17 +286,6 @@ void check_plate_geometry(const model::Connection& connection, const PlateOrigin
         bool ok = std::abs(signed_area(p)) > 0.0;
         if (!ok)
             context.report(origins.cutouts[k], path, "has no area: its points lie on one line");
-        for (const Point& q : p) {
-            if (ok && (!inside(outline, q) || boundary_distance(outline, q, q) == 0.0)) {
-                context.report(
-                    origins.cutouts[k], path,
-                    fmt::format(
-                        "point ({:.4g}, {:.4g}) {} lies outside the plate outline: a cut-out "
-                        "must lie inside the plate (shape the outline for notches and copes)",
-                        mm(q.x), mm(q.y), unit));
-                ok = false;
-            }
-        }
         cutouts.push_back(ok ? p : Polygon{});
     }
 
@@ -243,10 +323,15 @@ void check_plate_geometry(const model::Connection& connection, const PlateOrigin
                 const std::string name = plate.cutouts[k].name.empty()
                                              ? fmt::format("cutout[{}]", k)
                                              : "\"" + plate.cutouts[k].name + "\"";
+                const double gap = boundary_distance(cutouts[k], s.a, s.b) - s.radius;
                 if (inside(cutouts[k], b.centre))
                     report(b, "lies inside cut-out " + name);
-                else if (boundary_distance(cutouts[k], s.a, s.b) < s.radius)
+                else if (gap < 0)
                     report(b, "crosses the edge of cut-out " + name);
+                else if (gap < min_ligament)
+                    report(b, fmt::format("is {:.4g} {} from the edge of cut-out {}: keep at least "
+                                          "the minimum ligament of {:.4g} {} of plate between them",
+                                          mm(gap), unit, name, mm(min_ligament), unit));
             }
             for (const auto& other : holes) {
                 const double gap = segment_segment(s.a, s.b, other.shape.a, other.shape.b);
@@ -264,6 +349,7 @@ void check_plate_geometry(const model::Connection& connection, const PlateOrigin
             holes.push_back({g, b, s});
         }
     }
+    if (context.problems.size() == problems_before) check_region(connection, origins, context);
 }
 
 } // namespace lapwing::input

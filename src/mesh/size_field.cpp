@@ -59,6 +59,20 @@ SizeField::SizeField(const geometry::PlateRegion& region, const geometry::Region
     const double corner = std::clamp(settings.corner_size_ratio, 0.01, 1.0) * element_size;
     for (const Eigen::Vector2d& c : boundary.reentrant_corners)
         sources_.push_back({c, c, 0.0, corner});
+    // Boundary pieces shorter than the local size (a notch that meets the
+    // outline just short of a fillet or chamfer end, a short chamfer) become
+    // one triangle edge that is much shorter than its neighbours; Delaunay
+    // refinement does not grade away from such a small feature (it skips
+    // skinny triangles far below the local size), which left lone sliver
+    // triangles. A source of half the piece's length grades the mesh from it.
+    std::vector<Source> pieces;
+    for (const auto& loop : boundary.loops) {
+        for (const geometry::Curve& c : loop.curves) {
+            const double len = c.length();
+            if (len < at(0.5 * (c.start + c.end))) pieces.push_back({c.start, c.end, 0.0, len / 2});
+        }
+    }
+    sources_.insert(sources_.end(), pieces.begin(), pieces.end());
     for (const Source& s : sources_) smallest_ = std::min(smallest_, s.h0);
 }
 
