@@ -193,6 +193,37 @@ void Assembler::assemble(const Model& model, std::vector<double>& values,
     }
 }
 
+bool Assembler::link_column(const Model& model, int spring,
+                            std::vector<std::pair<int, double>>& column) const {
+    const DofMap& map = *map_;
+    std::array<int, 18> dofs{};
+    Eigen::Vector4d c;
+    const int n_dofs = link_dofs(model.link_springs[static_cast<size_t>(spring)], dofs, c);
+    column.clear();
+    for (int a = 0; a < n_dofs; ++a) {
+        const int dof = dofs[static_cast<size_t>(a)];
+        if (map.offset(dof) != 0.0) return false;
+        for (const auto& t : map.terms(dof)) column.emplace_back(t.unknown, c(a) * t.coefficient);
+    }
+    std::sort(column.begin(), column.end());
+    // Sum the terms of one unknown (a slave and its master, say).
+    size_t out = 0;
+    for (size_t i = 0; i < column.size(); ++i)
+        if (out > 0 && column[out - 1].first == column[i].first)
+            column[out - 1].second += column[i].second;
+        else
+            column[out++] = column[i];
+    column.resize(out);
+    return true;
+}
+
+void Assembler::add_outer(std::span<const std::pair<int, double>> column, double dk,
+                          std::vector<double>& values) const {
+    for (const auto& [i, ci] : column)
+        for (const auto& [j, cj] : column)
+            if (i >= j) values[static_cast<size_t>(pattern_.find(i, j))] += dk * ci * cj;
+}
+
 Eigen::MatrixXd Assembler::internal_forces(const Model& model, const Eigen::MatrixXd& u) const {
     Eigen::MatrixXd f = Eigen::MatrixXd::Zero(model.n_dofs(), u.cols());
     std::vector<Matrix3> D(model.materials.size());

@@ -8,6 +8,8 @@
 #include "fe/model.hpp"
 
 #include <Eigen/Core>
+#include <span>
+#include <utility>
 #include <vector>
 
 namespace lapwing::fe {
@@ -40,6 +42,16 @@ public:
     // for each column of `displacements` (full dofs). Reactions follow as
     // K u − f_applied.
     Eigen::MatrixXd internal_forces(const Model& model, const Eigen::MatrixXd& displacements) const;
+
+    // Link spring `spring` of the model in the unknowns: its stiffness in K̃
+    // is k c̃ c̃ᵀ with c̃ = Tᵀ c, returned as (unknown, coefficient) pairs
+    // sorted by unknown. False when one of its dofs carries a non-zero
+    // prescribed value, whose load on the unknowns would change with k.
+    bool link_column(const Model& model, int spring,
+                     std::vector<std::pair<int, double>>& column) const;
+    // values += dk c̃ c̃ᵀ (lower triangle, pattern order).
+    void add_outer(std::span<const std::pair<int, double>> column, double dk,
+                   std::vector<double>& values) const;
 
 private:
     const DofMap* map_;

@@ -5,6 +5,7 @@
 #include "fe/restraint_check.hpp"
 
 #include <chrono>
+#include <cmath>
 #include <fmt/format.h>
 
 namespace lapwing::fe {
@@ -78,6 +79,9 @@ void LinearStaticProblem::assemble_and_factorize() {
                                         describe_dof(*model_, map_.dof_of(e.unknown()))));
     }
     stats_.factor = cholesky_->stats();
+    factored_link_k_.resize(model_->link_springs.size());
+    for (size_t j = 0; j < factored_link_k_.size(); ++j)
+        factored_link_k_[j] = model_->link_springs[j].k;
     // A positive but vanishing pivot: singular in all but round-off.
     if (stats_.factor.rcond < 1e-15)
         throw AnalysisError(
@@ -85,6 +89,52 @@ void LinearStaticProblem::assemble_and_factorize() {
                         "condition {:.2g}): part "
                         "of the model is a mechanism or is not connected to the supports",
                         stats_.factor.rcond));
+}
+
+bool LinearStaticProblem::update_link_springs(const Model& model, int max_rank) {
+    model_ = &model;
+    // Stiffness added and removed, one column sqrt|dk| c̃ per changed spring.
+    std::vector<Eigen::Triplet<double>> added, removed;
+    int n_added = 0, n_removed = 0;
+    // values_ is updated in place: a refactorization assembles it anew.
+    std::vector<std::pair<int, double>> column;
+    for (size_t j = 0; j < factored_link_k_.size(); ++j) {
+        const double dk = model.link_springs[j].k - factored_link_k_[j];
+        if (dk == 0.0) continue;
+        if (!assembler_->link_column(model, static_cast<int>(j), column) ||
+            n_added + n_removed >= max_rank) {
+            refactorize(model);
+            return false;
+        }
+        assembler_->add_outer(column, dk, values_);
+        auto& entries = dk > 0 ? added : removed;
+        const int col = dk > 0 ? n_added++ : n_removed++;
+        for (const auto& [unknown, c] : column)
+            entries.emplace_back(unknown, col, std::sqrt(std::abs(dk)) * c);
+    }
+    if (n_added + n_removed == 0) return true;
+    const auto as_matrix = [&](const std::vector<Eigen::Triplet<double>>& entries, int cols) {
+        Eigen::SparseMatrix<double> m(map_.n_unknowns(), cols);
+        m.setFromTriplets(entries.begin(), entries.end());
+        return m;
+    };
+    // Additions first: a downdate of the larger matrix loses less.
+    const bool ok = (n_added == 0 || cholesky_->modify(as_matrix(added, n_added), true)) &&
+                    (n_removed == 0 || cholesky_->modify(as_matrix(removed, n_removed), false));
+    if (!ok || cholesky_->stats().rcond < 1e-15) {
+        refactorize(model); // and its messages, should the matrix be singular
+        return false;
+    }
+    for (size_t j = 0; j < factored_link_k_.size(); ++j)
+        factored_link_k_[j] = model.link_springs[j].k;
+    stats_.factor = cholesky_->stats();
+    return true;
+}
+
+Eigen::VectorXd LinearStaticProblem::displacements(const Loads& loads) const {
+    const Eigen::VectorXd f =
+        map_.restrict_to_unknowns(applied_forces(*model_, loads)) + prescribed_load_;
+    return map_.expand(cholesky_->solve(f));
 }
 
 Solution LinearStaticProblem::solve(const Loads& loads) const {

@@ -50,12 +50,22 @@ public:
     // those of the coordinates at construction.
     void refactorize(const Model& model);
 
+    // refactorize() for a model whose only change since the last
+    // factorization is the stiffness of some link springs (contact by an
+    // active set): up to `max_rank` changed springs modify the factor
+    // (SparseCholesky::modify) instead of factorizing it again. Skips the
+    // restraint check, which removing springs cannot fail before the
+    // factorization does. Returns false when it refactorized instead.
+    bool update_link_springs(const Model& model, int max_rank = 512);
+
     LinearStaticProblem(const LinearStaticProblem&) = delete;
     LinearStaticProblem& operator=(const LinearStaticProblem&) = delete;
 
     Solution solve(const Loads& loads) const;
     // One factorization, many right-hand sides.
     std::vector<Solution> solve(std::span<const Loads> load_cases) const;
+    // The displacements of every dof alone, without reactions and residual.
+    Eigen::VectorXd displacements(const Loads& loads) const;
 
     const Model& model() const { return *model_; }
     const DofMap& dof_map() const { return map_; }
@@ -72,6 +82,7 @@ private:
     std::vector<double> values_;
     Eigen::VectorXd prescribed_load_;
     std::unique_ptr<SparseCholesky> cholesky_;
+    std::vector<double> factored_link_k_; // link spring stiffness in the factor
     ProblemStats stats_;
 };
 

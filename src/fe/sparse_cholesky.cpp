@@ -120,6 +120,9 @@ public:
         stats_.ordering = (o >= 0 && o <= 6) ? names[o] : "?";
     }
     void factorize(const SparsePattern& pattern, std::span<const double> values) override {
+        // A modified factor is simplicial LDLᵀ: analyse again for a
+        // supernodal factorization.
+        if (modified_) analyse(pattern), modified_ = false;
         const auto start = std::chrono::steady_clock::now();
         cholmod_sparse A = view(pattern, values);
         cholmod_factorize(&A, factor_, &common_);
@@ -156,6 +159,52 @@ public:
     }
     FactorStats stats() const override { return stats_; }
 
+    // CHOLMOD's multiple-rank update and downdate (Davis & Hager 2001, SIAM
+    // J. Matrix Anal. Appl. 22:997–1013), which turns the factor into a
+    // simplicial LDLᵀ. It works on the rows of L, so the columns are
+    // permuted by the fill-reducing ordering first.
+    bool modify(const Eigen::SparseMatrix<double>& columns, bool add) override {
+        if (!factor_ || columns.rows() != static_cast<Eigen::Index>(factor_->n)) return false;
+        if (columns.nonZeros() == 0) return true;
+        const auto n = static_cast<int>(factor_->n);
+        const auto* perm = static_cast<const int*>(factor_->Perm);
+        std::vector<int> position(static_cast<size_t>(n));
+        for (int k = 0; k < n; ++k) position[static_cast<size_t>(perm ? perm[k] : k)] = k;
+        std::vector<Eigen::Triplet<double>> entries;
+        for (int j = 0; j < columns.outerSize(); ++j)
+            for (Eigen::SparseMatrix<double>::InnerIterator it(columns, j); it; ++it)
+                entries.emplace_back(position[static_cast<size_t>(it.row())], j, it.value());
+        Eigen::SparseMatrix<double, Eigen::ColMajor, int> permuted(columns.rows(), columns.cols());
+        permuted.setFromTriplets(entries.begin(), entries.end());
+        permuted.makeCompressed();
+        cholmod_sparse C{};
+        C.nrow = static_cast<size_t>(permuted.rows());
+        C.ncol = static_cast<size_t>(permuted.cols());
+        C.nzmax = static_cast<size_t>(permuted.nonZeros());
+        C.p = permuted.outerIndexPtr();
+        C.i = permuted.innerIndexPtr();
+        C.x = permuted.valuePtr();
+        C.stype = 0;
+        C.itype = CHOLMOD_INT;
+        C.xtype = CHOLMOD_REAL;
+        C.dtype = CHOLMOD_DOUBLE;
+        C.sorted = 1;
+        C.packed = 1;
+        const auto start = std::chrono::steady_clock::now();
+        modified_ = true;
+        const int ok = cholmod_updown(add ? 1 : 0, &C, factor_, &common_);
+        stats_.seconds_factorize = seconds_since(start);
+        if (!ok || common_.status != CHOLMOD_OK || factor_->is_super || factor_->is_ll)
+            return false;
+        // D is stored on L's diagonal: every pivot must stay positive.
+        const auto* Lp = static_cast<const int*>(factor_->p);
+        const auto* Lx = static_cast<const double*>(factor_->x);
+        for (int j = 0; j < n; ++j)
+            if (!(Lx[Lp[j]] > 0)) return false;
+        stats_.rcond = cholmod_rcond(factor_, &common_);
+        return true;
+    }
+
 private:
     static cholmod_sparse view(const SparsePattern& p, std::span<const double> values) {
         cholmod_sparse A{};
@@ -176,6 +225,7 @@ private:
     Ordering ordering_;
     mutable cholmod_common common_{};
     cholmod_factor* factor_ = nullptr;
+    bool modified_ = false; // by modify(): simplicial LDLᵀ now
     FactorStats stats_{"CHOLMOD supernodal", "?"};
 };
 #endif

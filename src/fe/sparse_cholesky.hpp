@@ -8,6 +8,7 @@
 #include "fe/assembly.hpp"
 
 #include <Eigen/Core>
+#include <Eigen/SparseCore>
 #include <memory>
 #include <span>
 #include <stdexcept>
@@ -58,6 +59,17 @@ public:
     virtual void factorize(const SparsePattern& pattern, std::span<const double> values) = 0;
     // Solves for every column of b.
     virtual Eigen::MatrixXd solve(const Eigen::MatrixXd& b) const = 0;
+    // The factor of A ± Σ c cᵀ over the columns c of `columns` (unknowns ×
+    // rank), made by modifying the current factor rather than factorizing
+    // again: a few changed springs cost a few paths of the elimination tree.
+    // False where the back end cannot, or the modified factor is no longer
+    // safely positive definite; the factor is then unusable until the next
+    // factorize().
+    virtual bool modify(const Eigen::SparseMatrix<double>& columns, bool add) {
+        (void)columns;
+        (void)add;
+        return false;
+    }
     virtual FactorStats stats() const = 0;
 };
 
