@@ -3,6 +3,7 @@
 
 #include "analysis/analyse.hpp"
 #include "check/peaks.hpp"
+#include "check/reuse_cache.hpp"
 #include "mesh/size_field.hpp"
 
 #include <algorithm>
@@ -46,17 +47,19 @@ std::vector<std::vector<int>> held_nodes(const model::Connection& c, const mesh:
 
 } // namespace
 
-Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settings) {
+Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settings,
+                    ReuseCache* cache) {
     Evaluation e;
     auto start = std::chrono::steady_clock::now();
     e.layout = analysis::plate_layout(c);
     e.settings = settings;
     e.element_size = mesh::detail::element_size(e.layout.region, settings);
-    e.mesh = mesh::build_mesh(e.layout.region, settings);
+    ReuseCache::Slot* slot = cache ? &cache->slot(e.layout.region, settings) : nullptr;
+    e.mesh = slot ? slot->mesh : mesh::build_mesh(e.layout.region, settings);
     e.seconds_mesh = seconds_since(start);
 
     start = std::chrono::steady_clock::now();
-    e.results = analysis::analyse(c, e.mesh, e.layout);
+    e.results = analysis::analyse(c, e.mesh, e.layout, slot ? &slot->solver : nullptr);
     e.seconds_analysis = seconds_since(start);
 
     start = std::chrono::steady_clock::now();

@@ -52,7 +52,7 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     CheckOutcome out;
     out.connection = c;
     const auto start = std::chrono::steady_clock::now();
-    Evaluation e = evaluate(c, analysis::mesh_settings(c));
+    Evaluation e = evaluate(c, analysis::mesh_settings(c), options.cache);
     out.table = make_table(stress_rows(c, e));
     out.seconds.mesh = e.seconds_mesh;
     out.seconds.analysis = e.seconds_analysis;
@@ -64,7 +64,7 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
         mesh::MeshSettings fine_settings = e.settings;
         fine_settings.element_size = 0.5 * e.element_size;
         fine_settings.elements_around_hole = 2 * mesh::detail::elements_around_hole(e.settings);
-        const Evaluation f = evaluate(c, fine_settings);
+        const Evaluation f = evaluate(c, fine_settings, options.cache);
         Convergence& cv = out.convergence;
         cv.done = true;
         cv.coarse_size = e.element_size;
