@@ -81,22 +81,22 @@ int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
         std::vector<sweep::Axis> axes;
         for (const std::string& v : args.vary) axes.push_back(sweep::parse_axis(v));
         if (axes.empty())
-            throw InputError(
-                Diagnostic{"", 0, 0, "--vary", ": give at least one, e.g. --vary t=8:30:2", ""});
+            throw InputError(Diagnostic{"", 0, 0, "--vary",
+                                        "is needed at least once, e.g. --vary t=8:30:2", ""});
         const std::vector<sweep::Variant> grid = sweep::make_grid(axes);
         const int search_axis = args.find_min.empty() ? -1 : sweep::axis_index(axes, args.find_min);
         std::vector<sweep::Variant> variants = grid;
         if (!args.shard.empty()) {
             if (search_axis >= 0)
                 throw InputError(Diagnostic{"", 0, 0, "--shard",
-                                            ": cannot be combined with --find-min (the search "
+                                            "cannot be combined with --find-min (the search "
                                             "picks its variants as it goes); shard the full grid",
                                             ""});
             variants = sweep::shard_of(grid, sweep::parse_shard(args.shard));
         }
         if (std::error_code ec; !fs::is_directory(args.output_folder, ec))
             throw InputError(
-                Diagnostic{"", 0, 0, "-o " + args.output_folder, ": there is no such folder", ""});
+                Diagnostic{"", 0, 0, "-o", args.output_folder + ": there is no such folder", ""});
 
         sweep::RunOptions options;
         options.threads = args.threads > 0 ? args.threads : sweep::default_threads();

@@ -63,7 +63,7 @@ CsvTable parse_sweep_csv(std::string_view text, std::string_view name) {
     CsvTable table;
     int line_no = 0;
     size_t start = 0;
-    if (text.empty()) bad(name, 0, ": is empty, not a sweep CSV");
+    if (text.empty()) bad(name, 0, "is empty, not a sweep CSV");
     while (start < text.size()) {
         // A quoted field may hold a line end: find the end of the record.
         size_t end = start;
@@ -80,7 +80,7 @@ CsvTable parse_sweep_csv(std::string_view text, std::string_view name) {
         if (line_no == 1) {
             if (!line.starts_with("variant,") ||
                 line.find(",governing_ratio,") == std::string::npos)
-                bad(name, 1, ": the first line is not a lapwing sweep header (variant,...)");
+                bad(name, 1, "the first line is not a lapwing sweep header (variant,...)");
             table.header = line;
             continue;
         }
@@ -89,15 +89,15 @@ CsvTable parse_sweep_csv(std::string_view text, std::string_view name) {
         const auto [p, ec] = std::from_chars(line.data(), line.data() + line.find(','), variant);
         if (comma == std::string::npos || ec != std::errc() || p != line.data() + comma ||
             variant < 1)
-            bad(name, line_no, ": the row does not start with a variant number");
+            bad(name, line_no, "the row does not start with a variant number");
         table.rows.push_back({variant, line});
     }
-    if (table.header.empty()) bad(name, 1, ": no header line");
+    if (table.header.empty()) bad(name, 1, "no header line");
     return table;
 }
 
 std::string merge_sweep_csvs(const std::vector<NamedCsv>& shards, int expected_total) {
-    if (shards.empty()) throw InputError(Diagnostic{"", 0, 0, "merge", ": no files given", ""});
+    if (shards.empty()) throw InputError(Diagnostic{"", 0, 0, "", "merge: no files given", ""});
     std::string header;
     std::string header_from;
     std::map<int, std::pair<std::string, std::string>> rows; // variant → (line, file)
@@ -108,14 +108,14 @@ std::string merge_sweep_csvs(const std::vector<NamedCsv>& shards, int expected_t
             header_from = s.name;
         } else if (t.header != header) {
             bad(s.name, 1,
-                fmt::format(": its columns differ from those of {}: not shards of one sweep",
+                fmt::format("its columns differ from those of {}: not shards of one sweep",
                             header_from));
         }
         for (const auto& [variant, line] : t.rows) {
             const auto [it, fresh] = rows.try_emplace(variant, line, s.name);
             if (!fresh)
                 bad(s.name, 0,
-                    fmt::format(": variant {} is also in {}: shards overlap", variant,
+                    fmt::format("variant {} is also in {}: shards overlap", variant,
                                 it->second.second));
         }
     }
@@ -129,20 +129,22 @@ std::string merge_sweep_csvs(const std::vector<NamedCsv>& shards, int expected_t
     }
     for (; expected <= expected_total; ++expected) missing.push_back(expected);
     if (expected_total > 0 && !rows.empty() && rows.rbegin()->first > expected_total)
-        throw InputError(Diagnostic{"", 0, 0, "merge --expect",
-                                    fmt::format(": variant {} is beyond the {} expected",
-                                                rows.rbegin()->first, expected_total),
-                                    ""});
+        throw InputError(
+            Diagnostic{"", 0, 0, "merge --expect",
+                       fmt::format("{}: variant {} is beyond the {} expected", expected_total,
+                                   rows.rbegin()->first, expected_total),
+                       ""});
     if (!missing.empty()) {
         std::string list;
         for (size_t i = 0; i < std::min<size_t>(missing.size(), 10); ++i)
             list += (i ? ", " : "") + std::to_string(missing[i]);
         if (missing.size() > 10) list += fmt::format(" and {} more", missing.size() - 10);
-        throw InputError(Diagnostic{"", 0, 0, "merge",
-                                    fmt::format(": variants {} are in none of the files: a shard "
-                                                "is missing or was interrupted",
-                                                list),
-                                    ""});
+        throw InputError(
+            Diagnostic{"", 0, 0, "",
+                       fmt::format("merge: variants {} are in none of the files: a shard "
+                                   "is missing or was interrupted",
+                                   list),
+                       ""});
     }
     return out;
 }

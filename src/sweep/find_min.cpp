@@ -30,10 +30,11 @@ int axis_index(const std::vector<Axis>& axes, const std::string& param) {
     for (size_t k = 0; k < axes.size(); ++k)
         if (axes[k].name == param || axes[k].key == param) return static_cast<int>(k);
     Diagnostic d;
-    d.key_path = "--find-min " + param;
+    d.key_path = "--find-min";
     std::string names;
     for (const Axis& a : axes) names += (names.empty() ? "" : ", ") + a.name;
-    d.message = fmt::format(": not one of the varied keys ({})", names.empty() ? "none" : names);
+    d.message =
+        fmt::format("{}: not one of the varied keys ({})", param, names.empty() ? "none" : names);
     throw InputError(d);
 }
 

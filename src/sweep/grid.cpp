@@ -15,8 +15,8 @@ namespace {
 
 [[noreturn]] void bad(std::string_view option, std::string_view argument, const std::string& why) {
     Diagnostic d;
-    d.key_path = fmt::format("{} {}", option, argument);
-    d.message = ": " + why;
+    d.key_path = std::string(option);
+    d.message = fmt::format("{}: {}", argument, why);
     throw InputError(d);
 }
 

@@ -7,6 +7,7 @@
 #include "core/error.hpp"
 #include "input/load_connection.hpp"
 
+#include <algorithm>
 #include <chrono>
 #include <condition_variable>
 #include <deque>
@@ -19,12 +20,15 @@ namespace {
 
 // One line per problem, joined: a CSV cell cannot hold the caret drawing.
 std::string one_line(const InputError& e) {
+    constexpr size_t shown = 3; // the rest counted: a CSV cell, not a report
     std::string out;
-    for (const Diagnostic& d : e.diagnostics()) {
-        std::string text = d.format();
+    const auto& all = e.diagnostics();
+    for (size_t i = 0; i < std::min(all.size(), shown); ++i) {
+        std::string text = all[i].format();
         text = text.substr(0, text.find('\n'));
         out += (out.empty() ? "" : "; ") + text;
     }
+    if (all.size() > shown) out += "; and " + std::to_string(all.size() - shown) + " more";
     return out.empty() ? std::string(e.what()) : out;
 }
 
