@@ -141,6 +141,11 @@ void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& 
 } // namespace
 
 Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout) {
+    return analyse(c, mesh, layout, nullptr);
+}
+
+Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout,
+                SolverReuse* reuse) {
     const auto start = std::chrono::steady_clock::now();
     Results results;
     results.problem = build_fe_problem(c, mesh, layout);
@@ -153,9 +158,11 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         specs.push_back({comb.name, true, comb.factors});
 
     fe::Model working = p.model;
-    std::optional<fe::LinearStaticProblem> solver;
+    std::optional<fe::LinearStaticProblem> own_solver;
+    fe::LinearStaticProblem* solver = nullptr;
     try {
-        solver.emplace(working, p.constraints);
+        solver = reuse ? &reuse->problem_for(working, p.constraints)
+                       : &own_solver.emplace(working, p.constraints);
     } catch (const AnalysisError& e) {
         rethrow_in_connection_terms(c, p, e);
     }

@@ -6,6 +6,7 @@
 
 #include "analysis/plate_region.hpp"
 #include "analysis/results.hpp"
+#include "analysis/solver_reuse.hpp"
 #include "mesh/mesh.hpp"
 #include "model/connection.hpp"
 
@@ -16,5 +17,11 @@ namespace lapwing::analysis {
 // a mechanism, contact that does not settle).
 Results analyse(const model::Connection& connection, const mesh::Mesh& mesh,
                 const PlateLayout& layout);
+
+// The same, keeping the sparse pattern and the ordering in `reuse` for the
+// next analysis of a model with the same topology (sweeps); the results
+// are those of the overload above. `reuse` may be null.
+Results analyse(const model::Connection& connection, const mesh::Mesh& mesh,
+                const PlateLayout& layout, SolverReuse* reuse);
 
 } // namespace lapwing::analysis

@@ -6,6 +6,7 @@
 #include "check/section_integral.hpp"
 #include "check/section_lines.hpp"
 #include "fe/point_locator.hpp"
+#include "check/reuse_cache.hpp"
 #include "mesh/size_field.hpp"
 
 #include <algorithm>
@@ -54,17 +55,19 @@ std::map<std::string, double> case_factors(const model::Connection& c, size_t k)
     return c.combinations.at(k - c.load_cases.size()).factors;
 }
 
-Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settings) {
+Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settings,
+                    ReuseCache* cache) {
     Evaluation e;
     auto start = std::chrono::steady_clock::now();
     e.layout = analysis::plate_layout(c);
     e.settings = settings;
     e.element_size = mesh::detail::element_size(e.layout.region, settings);
-    e.mesh = mesh::build_mesh(e.layout.region, settings);
+    ReuseCache::Slot* slot = cache ? &cache->slot(e.layout.region, settings) : nullptr;
+    e.mesh = slot ? slot->mesh : mesh::build_mesh(e.layout.region, settings);
     e.seconds_mesh = seconds_since(start);
 
     start = std::chrono::steady_clock::now();
-    e.results = analysis::analyse(c, e.mesh, e.layout);
+    e.results = analysis::analyse(c, e.mesh, e.layout, slot ? &slot->solver : nullptr);
     e.seconds_analysis = seconds_since(start);
 
     start = std::chrono::steady_clock::now();

@@ -25,7 +25,10 @@ struct Evaluation {
     double seconds_mesh = 0, seconds_analysis = 0, seconds_measure = 0;
 };
 
-Evaluation evaluate(const model::Connection& connection, const mesh::MeshSettings& settings);
+// With a cache (sweeps), the mesh and the solver state come from it when
+// the plate region, settings and topology match an earlier run.
+Evaluation evaluate(const model::Connection& connection, const mesh::MeshSettings& settings,
+                    ReuseCache* cache = nullptr);
 
 // Rows from the stress field: peaks, section stresses, welds.
 std::vector<CheckRow> stress_rows(const model::Connection& connection, const Evaluation& e);

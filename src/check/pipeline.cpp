@@ -72,7 +72,7 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     CheckOutcome out;
     out.connection = c;
     const auto start = std::chrono::steady_clock::now();
-    Evaluation e = evaluate(c, analysis::mesh_settings(c));
+    Evaluation e = evaluate(c, analysis::mesh_settings(c), options.cache);
     std::vector<CheckRow> rows = stress_rows(c, e);
     std::vector<CheckRow> classical = classical_rows(c, e);
     rows.insert(rows.end(), std::make_move_iterator(classical.begin()),
@@ -88,7 +88,7 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
         mesh::MeshSettings fine_settings = e.settings;
         fine_settings.element_size = 0.5 * e.element_size;
         fine_settings.elements_around_hole = 2 * mesh::detail::elements_around_hole(e.settings);
-        const Evaluation f = evaluate(c, fine_settings);
+        const Evaluation f = evaluate(c, fine_settings, options.cache);
         Convergence& cv = out.convergence;
         cv.done = true;
         cv.coarse_size = e.element_size;

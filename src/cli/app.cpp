@@ -3,6 +3,7 @@
 #include "cli/app.hpp"
 
 #include "cli/commands.hpp"
+#include "cli/sweep_command.hpp"
 #include "core/error.hpp"
 
 #include <CLI/CLI.hpp>
@@ -119,6 +120,51 @@ int run(int argc, char** argv) {
         "the method of each row and does not claim code compliance.\n"
         "Example: lapwing check G3.toml -o G3-out");
 
+    SweepArgs sweep_args;
+    auto* sweep_cmd = app.add_subcommand(
+        "sweep", "Check every variant of a template over a grid of values, in parallel; write "
+                 "sweep.csv and sweep.html");
+    sweep_cmd->add_option("FILE", sweep_args.file, "Connection template (TOML)")->required();
+    sweep_cmd
+        ->add_option("--vary", sweep_args.vary,
+                     "A key and its values, KEY=START:STOP:STEP (stop included) or KEY=A,B,C; "
+                     "a bare name is a parameter (t means parameters.t); repeat for a grid, the "
+                     "first varying slowest")
+        ->required();
+    sweep_cmd->add_option("--set", sweep_args.sets,
+                          "Override one key for every variant, KEY=VALUE (repeatable)");
+    sweep_cmd->add_option("-j,--jobs", sweep_args.threads, "Worker threads (default: every core)")
+        ->check(CLI::Range(1, 1024));
+    sweep_cmd->add_option("-o,--output", sweep_args.output_folder,
+                          "Folder for sweep.csv and sweep.html (default: the current folder)");
+    sweep_cmd->add_option("--find-min", sweep_args.find_min,
+                          "Search the smallest passing value of this varied key by bisection "
+                          "(per combination of the other keys) instead of running every variant");
+    sweep_cmd->add_option("--shard", sweep_args.shard,
+                          "Run only part I of N (every N-th variant, from variant I), for a batch "
+                          "scheduler; join the parts with lapwing merge");
+    sweep_cmd->add_flag("--single-mesh", sweep_args.single_mesh,
+                        "Skip the finer convergence mesh of each variant (quicker)");
+    sweep_cmd->add_flag("--no-reuse", sweep_args.no_reuse,
+                        "Mesh and factorize every variant afresh (for timing comparisons)");
+    sweep_cmd->add_flag("-q,--quiet", sweep_args.quiet, "No progress and no summary");
+    sweep_cmd->footer(
+        "Exit codes: 0 written (whether variants pass or not), 2 bad input or no variant could "
+        "be built,\n130 interrupted: the completed rows are in sweep-interrupted.csv.\n"
+        "Example: lapwing sweep G3.toml --vary t=8:30:2 --find-min t -o G3-sweep");
+
+    std::vector<std::string> merge_files;
+    std::string merge_output;
+    int merge_expect = 0;
+    auto* merge_cmd = app.add_subcommand(
+        "merge", "Join the sweep.csv files of the shards of one sweep into the full sweep.csv");
+    merge_cmd->add_option("FILES", merge_files, "Shard CSV files")->required();
+    merge_cmd->add_option("-o,--output", merge_output,
+                          "File to write (default: print to standard output)");
+    merge_cmd->add_option("--expect", merge_expect,
+                          "Number of variants of the full sweep, to catch a missing last shard")
+        ->check(CLI::Range(1, 100000));
+
 #ifdef LAPWING_HAS_VERIFY
     std::string example = "all";
     auto* verify_cmd = app.add_subcommand(
@@ -146,6 +192,13 @@ int run(int argc, char** argv) {
             check_args.command_line += (i ? " " : "") + std::string(argv[i]);
         return run_check(check_args, std::cout, std::cerr);
     }
+    if (sweep_cmd->parsed()) {
+        for (int i = 0; i < argc; ++i)
+            sweep_args.command_line += (i ? " " : "") + std::string(argv[i]);
+        return run_sweep(sweep_args, std::cout, std::cerr);
+    }
+    if (merge_cmd->parsed())
+        return run_merge(merge_files, merge_output, merge_expect, std::cout, std::cerr);
     if (analyse_cmd->parsed()) return run_analyse(analyse_file, analyse_sets, std::cout, std::cerr);
     if (validate_cmd->parsed()) return run_validate(file, sets, resolved, std::cout, std::cerr);
 #ifdef LAPWING_HAS_VERIFY
