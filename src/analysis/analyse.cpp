@@ -39,7 +39,8 @@ double gap(const fe::LinkSpring& s, const Eigen::VectorXd& u) {
 }
 
 void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& model,
-               const fe::Solution& s, CaseResult& out) {
+               const fe::Solution& s, const std::map<std::string, double>& factors,
+               CaseResult& out) {
     out.u = s.u;
     out.dof_reactions = s.reactions;
     out.solver_residual = s.relative_residual;
@@ -61,10 +62,13 @@ void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& 
 
     // Bolt forces on the plate.
     out.bolts.clear();
+    const std::vector<Eigen::Vector2d> prescribed = prescribed_bolt_forces(c, p, factors);
     for (int i = 0; i < static_cast<int>(p.bolts.size()); ++i) {
         const BoltModel& b = p.bolts[static_cast<size_t>(i)];
         Eigen::Vector2d f(0, 0);
-        if (b.first_spring >= 0) {
+        if (b.prescribed) {
+            f = prescribed[static_cast<size_t>(i)];
+        } else if (b.first_spring >= 0) {
             const Eigen::Vector2d other =
                 b.other_node >= 0 ? node_u(s.u, b.other_node) : Eigen::Vector2d::Zero();
             f = b.stiffness * (other - node_u(s.u, b.plate_node));
@@ -184,7 +188,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 s.applied += factor * it->second->applied;
                 s.relative_residual = std::max(s.relative_residual, it->second->relative_residual);
             }
-            fill_case(c, p, working, s, out);
+            fill_case(c, p, working, s, specs[i].factors, out);
         }
     } else {
         // Bearing-only contact: each case and combination by its own active set.
@@ -238,7 +242,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                     fmt::format("bearing contact in load case \"{}\" did not settle in {} passes",
                                 out.name, max_contact_iterations));
             out.contact_closed.assign(active.begin(), active.end());
-            fill_case(c, p, working, s, out);
+            fill_case(c, p, working, s, specs[i].factors, out);
         }
     }
     results.seconds_solve =
