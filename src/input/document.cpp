@@ -115,7 +115,7 @@ Node convert(const toml::value& v, std::string_view file_name) {
     case toml::value_t::table: {
         n.kind = Node::Kind::table;
         for (const auto& [key, child] : v.as_table())
-            n.entries.emplace_back(key, convert(child, file_name));
+            n.entries.push_back({key, convert(child, file_name)});
         // toml11 keeps tables unordered; file order makes messages and summaries stable.
         std::sort(n.entries.begin(), n.entries.end(), [](const auto& a, const auto& b) {
             if (a.second.origin.line != b.second.origin.line)
