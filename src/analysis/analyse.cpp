@@ -40,8 +40,10 @@ double gap(const fe::LinkSpring& s, const Eigen::VectorXd& u) {
 }
 
 void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& model,
-               const fe::Solution& s, CaseResult& out) {
+               const fe::Solution& s, const std::map<std::string, double>& factors,
+               CaseResult& out) {
     out.u = s.u;
+    out.dof_reactions = s.reactions;
     out.solver_residual = s.relative_residual;
     auto nodal = fe::recover_spr(model, fe::spr_samples(model, s.u));
     nodal.resize(static_cast<size_t>(p.n_plate_nodes));
@@ -61,10 +63,13 @@ void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& 
 
     // Bolt forces on the plate.
     out.bolts.clear();
+    const std::vector<Eigen::Vector2d> prescribed = prescribed_bolt_forces(c, p, factors);
     for (int i = 0; i < static_cast<int>(p.bolts.size()); ++i) {
         const BoltModel& b = p.bolts[static_cast<size_t>(i)];
         Eigen::Vector2d f(0, 0);
-        if (b.first_spring >= 0) {
+        if (b.prescribed) {
+            f = prescribed[static_cast<size_t>(i)];
+        } else if (b.first_spring >= 0) {
             const Eigen::Vector2d other =
                 b.other_node >= 0 ? node_u(s.u, b.other_node) : Eigen::Vector2d::Zero();
             f = b.stiffness * (other - node_u(s.u, b.plate_node));
@@ -214,7 +219,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 s.applied += factor * it->second->applied;
                 s.relative_residual = std::max(s.relative_residual, it->second->relative_residual);
             }
-            fill_case(c, p, working, s, out);
+            fill_case(c, p, working, s, specs[i].factors, out);
             check_finite(out);
         }
     } else {
@@ -270,7 +275,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                     fmt::format("bearing contact in load case \"{}\" did not settle in {} passes",
                                 out.name, max_contact_iterations));
             out.contact_closed.assign(active.begin(), active.end());
-            fill_case(c, p, working, s, out);
+            fill_case(c, p, working, s, specs[i].factors, out);
             check_finite(out);
         }
     }

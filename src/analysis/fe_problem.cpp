@@ -1,6 +1,7 @@
 // Building the FE problem of a connection: plate, bolts, members, supports.
 #include "analysis/fe_problem.hpp"
 
+#include "analysis/bearing_share.hpp"
 #include "analysis/bolt_ties.hpp"
 #include "analysis/fastener_stiffness.hpp"
 #include "core/error.hpp"
@@ -35,6 +36,33 @@ int add_node(fe::Model& m, const Eigen::Vector2d& x) {
 
 std::string member_path(int i) {
     return fmt::format("member[{}]", i);
+}
+
+// The member's factored force and its moment about the work point.
+std::pair<Eigen::Vector2d, double> member_action(const model::Member& member,
+                                                 const std::map<std::string, double>& factors) {
+    Eigen::Vector2d force(0, 0);
+    double moment = 0;
+    for (const auto& [case_name, factor] : factors) {
+        const auto it = member.forces.find(case_name);
+        if (it == member.forces.end()) continue;
+        const model::MemberForces& f = it->second;
+        const double a = member.angle * degrees;
+        const Eigen::Vector2d axis(std::cos(a), std::sin(a)), across(-std::sin(a), std::cos(a));
+        // Axial + pulls the plate along the member, away from the joint.
+        const Eigen::Vector2d F = f.axial * axis + f.shear * across;
+        // The force acts through `moment_point` with the couple M about
+        // it; moved to the work point it adds (q − w) × F.
+        const Eigen::Vector2d arm(f.moment_point.x - member.work_point.x,
+                                  f.moment_point.y - member.work_point.y);
+        force += factor * F;
+        moment += factor * (f.moment + arm.x() * F.y() - arm.y() * F.x());
+    }
+    return {force, moment};
+}
+
+double hole_diameter(const model::Connection& c, const BoltModel& b) {
+    return c.bolt_groups[static_cast<size_t>(b.group)].hole.width;
 }
 
 } // namespace
@@ -79,6 +107,14 @@ FeProblem build_fe_problem(const model::Connection& c, const mesh::Mesh& mesh,
         if (s.kind != model::SupportKind::bolted) continue;
         const int g = group_index(s.bolt_group);
         if (g < 0) continue;
+        if (c.bolt_groups[static_cast<size_t>(g)].tie == model::TieKind::cosine)
+            problems.push_back(
+                {"", 0, 0, fmt::format("bolt_group[{}].tie", g),
+                 fmt::format("= \"cosine\": group \"{}\" fixes the plate to support \"{}\"; a "
+                             "support's bolts need a tie (\"spread\" or \"bearing\"); the cosine "
+                             "share is for the bolts of a member",
+                             s.bolt_group, s.name),
+                 ""});
         if (group_member[static_cast<size_t>(g)] >= 0)
             problems.push_back(
                 {"", 0, 0, fmt::format("support[{}].bolt_group", i),
@@ -96,14 +132,37 @@ FeProblem build_fe_problem(const model::Connection& c, const mesh::Mesh& mesh,
     for (int i = 0; i < static_cast<int>(c.members.size()); ++i) {
         const model::Member& member = c.members[static_cast<size_t>(i)];
         MemberModel& mm = p.members[static_cast<size_t>(i)];
-        mm.reference_node = add_node(m, {member.work_point.x, member.work_point.y});
         int n_bolts = 0;
+        bool prescribed = false;
         if (!member.bolt_group.empty()) {
             const int g = group_index(member.bolt_group);
-            if (g >= 0)
-                n_bolts = c.bolt_groups[static_cast<size_t>(g)].rows *
-                          c.bolt_groups[static_cast<size_t>(g)].lines;
+            if (g >= 0) {
+                const model::BoltGroup& group = c.bolt_groups[static_cast<size_t>(g)];
+                n_bolts = group.rows * group.lines;
+                prescribed = group.tie == model::TieKind::cosine;
+                if (prescribed && group.hole.width != group.hole.length)
+                    problems.push_back(
+                        {"", 0, 0, fmt::format("bolt_group[{}].tie", g),
+                         fmt::format("= \"cosine\": the cosine bearing pressure needs round holes; "
+                                     "group \"{}\" has slots (use \"spread\" or \"bearing\")",
+                                     group.name),
+                         ""});
+            }
         }
+        if (prescribed) {
+            // No rigid body: the shares are loads on the holes. One bolt cannot
+            // take a moment by the elastic method (no polar moment of area).
+            for (const auto& [case_name, f] : member.forces)
+                if (n_bolts == 1 && f.moment != 0.0)
+                    problems.push_back(
+                        {"", 0, 0, member_path(i) + ".forces." + case_name + ".moment",
+                         fmt::format("= {} N·mm: member \"{}\" has a single bolt, which cannot "
+                                     "carry a moment; use at least two bolts or remove the moment",
+                                     f.moment, member.name),
+                         ""});
+            continue;
+        }
+        mm.reference_node = add_node(m, {member.work_point.x, member.work_point.y});
         if (member.bolt_group.empty() || n_bolts > 1) {
             mm.rotation = static_cast<int>(m.rotation_nodes.size());
             m.rotation_nodes.push_back(mm.reference_node);
@@ -141,11 +200,19 @@ FeProblem build_fe_problem(const model::Connection& c, const mesh::Mesh& mesh,
         b.member = member;
         b.support = support;
         b.tie = group.tie;
-        b.plate_node = add_node(m, ref.centre);
         const HoleEdge edge = hole_edge(mesh, layout.region.holes[static_cast<size_t>(h)], h);
         b.hole_nodes = edge.nodes;
         b.hole_weights = edge.weights;
         b.hole_normals = edge.normals;
+        if (b.tie == model::TieKind::cosine) {
+            b.prescribed = true;
+            if (member >= 0)
+                p.members[static_cast<size_t>(member)].bolts.push_back(
+                    static_cast<int>(p.bolts.size()));
+            p.bolts.push_back(std::move(b));
+            continue;
+        }
+        b.plate_node = add_node(m, ref.centre);
         if (b.tie == model::TieKind::spread)
             add_spread_tie(b.plate_node, edge, p.constraints);
         else {
@@ -304,33 +371,45 @@ FeProblem build_fe_problem(const model::Connection& c, const mesh::Mesh& mesh,
     return p;
 }
 
+std::vector<Eigen::Vector2d> prescribed_bolt_forces(const model::Connection& c, const FeProblem& p,
+                                                    const std::map<std::string, double>& factors) {
+    std::vector<Eigen::Vector2d> out(p.bolts.size(), Eigen::Vector2d::Zero());
+    for (size_t i = 0; i < c.members.size(); ++i) {
+        const MemberModel& mm = p.members[i];
+        if (mm.reference_node >= 0 || mm.bolts.empty()) continue;
+        const auto [force, moment] = member_action(c.members[i], factors);
+        std::vector<Eigen::Vector2d> centres;
+        for (int bi : mm.bolts) centres.push_back(p.bolts[static_cast<size_t>(bi)].centre);
+        const Eigen::Vector2d about(c.members[i].work_point.x, c.members[i].work_point.y);
+        const auto shares = elastic_shares(centres, force, moment, about);
+        for (size_t k = 0; k < mm.bolts.size(); ++k)
+            out[static_cast<size_t>(mm.bolts[k])] = shares[k];
+    }
+    return out;
+}
+
 fe::Loads loads_for(const model::Connection& c, const mesh::Mesh& mesh, const FeProblem& p,
                     const std::map<std::string, double>& factors) {
     fe::Loads loads;
     for (int i = 0; i < static_cast<int>(c.members.size()); ++i) {
         const model::Member& member = c.members[static_cast<size_t>(i)];
         const MemberModel& mm = p.members[static_cast<size_t>(i)];
-        Eigen::Vector2d force(0, 0);
-        double moment = 0;
-        for (const auto& [case_name, factor] : factors) {
-            const auto it = member.forces.find(case_name);
-            if (it == member.forces.end()) continue;
-            const model::MemberForces& f = it->second;
-            const double a = member.angle * degrees;
-            const Eigen::Vector2d axis(std::cos(a), std::sin(a)), across(-std::sin(a), std::cos(a));
-            // Axial + pulls the plate along the member, away from the joint.
-            const Eigen::Vector2d F = f.axial * axis + f.shear * across;
-            // The force acts through `moment_point` with the couple M about
-            // it; moved to the work point it adds (q − w) × F.
-            const Eigen::Vector2d arm(f.moment_point.x - member.work_point.x,
-                                      f.moment_point.y - member.work_point.y);
-            force += factor * F;
-            moment += factor * (f.moment + arm.x() * F.y() - arm.y() * F.x());
-        }
+        if (mm.reference_node < 0) continue; // prescribed shares: loads on the holes, below
+        const auto [force, moment] = member_action(member, factors);
         loads.nodal.push_back({fe::dof_ux(mm.reference_node), force.x()});
         loads.nodal.push_back({fe::dof_uy(mm.reference_node), force.y()});
         if (mm.rotation >= 0)
             loads.nodal.push_back({fe::dof_rotation(p.model, mm.rotation), moment});
+    }
+    // Prescribed shares: a cosine bearing pressure on each bolt's hole.
+    const std::vector<Eigen::Vector2d> shares = prescribed_bolt_forces(c, p, factors);
+    for (size_t bi = 0; bi < p.bolts.size(); ++bi) {
+        const BoltModel& b = p.bolts[bi];
+        if (!b.prescribed) continue;
+        const auto& hole = hole_diameter(c, b);
+        for (const auto& f : cosine_bearing_forces(p.model, mesh, b.hole, b.centre, hole,
+                                                   c.plate.thickness, shares[bi]))
+            loads.nodal.push_back(f);
     }
     // Edge loads: force per length (or a total force spread evenly) on an
     // outline segment, as a traction t/thickness on its element edges.

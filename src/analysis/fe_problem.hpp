@@ -35,11 +35,12 @@ struct BoltModel {
     std::vector<double> hole_weights;          // arc-length shares, Σ = 1
     std::vector<Eigen::Vector2d> hole_normals; // outward normals of the hole edge at its nodes
     int first_contact = -1;                    // bearing ties: the link springs, one per hole node
+    bool prescribed = false; // cosine tie: the force is the member's equal share, applied as a load
     std::vector<double> contact_stiffness;
 };
 
 struct MemberModel {
-    int reference_node = -1; // at the work point
+    int reference_node = -1; // at the work point; -1 when its bolts take prescribed shares
     int rotation = -1;       // index into fe::Model::rotation_nodes, -1 for a single-bolt member
     std::vector<int> bolts;  // BoltModel indices
 };
@@ -66,6 +67,13 @@ struct FeProblem {
 // member edge that is also a support).
 FeProblem build_fe_problem(const model::Connection& connection, const mesh::Mesh& mesh,
                            const PlateLayout& layout);
+
+// The force each bolt of a member with the cosine tie puts on the plate
+// (equal share + elastic moment share), by FeProblem::bolts index; zero for
+// every other bolt.
+std::vector<Eigen::Vector2d> prescribed_bolt_forces(const model::Connection& connection,
+                                                    const FeProblem& problem,
+                                                    const std::map<std::string, double>& factors);
 
 // The loads of a factored combination of load cases (case name → factor).
 fe::Loads loads_for(const model::Connection& connection, const mesh::Mesh& mesh,

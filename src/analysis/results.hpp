@@ -27,6 +27,7 @@ struct CaseResult {
     std::string name;
     bool combination = false;
     Eigen::VectorXd u;                    // every dof of FeProblem::model
+    Eigen::VectorXd dof_reactions;        // K u − f per dof: the support forces on the plate, N
     std::vector<fe::Stress> nodal_stress; // plate nodes, by superconvergent patch recovery
     std::vector<BoltForce> bolts;
     std::vector<SupportReaction> reactions; // Connection::supports order

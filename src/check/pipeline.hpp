@@ -8,6 +8,7 @@
 #include "analysis/results.hpp"
 #include "check/check_table.hpp"
 #include "check/section.hpp"
+#include "check/weld_lines.hpp"
 #include "mesh/mesh.hpp"
 #include "model/connection.hpp"
 
@@ -16,11 +17,16 @@
 
 namespace lapwing::check {
 
+struct ReuseCache; // src/check/reuse_cache.hpp (sweeps)
+
 struct CheckOptions {
     // Also solve on a mesh with half the element size everywhere (twice the
     // elements around each hole) and report how every peak and section value
     // moves. Off only for quick looks; the calc sheet says so.
     bool two_mesh = true;
+    // For sweeps: a per-worker cache that reuses the mesh, the sparse pattern
+    // and the fill-reducing ordering when only values change between runs.
+    ReuseCache* cache = nullptr;
 };
 
 // The highest local stresses of one load case, from the recovered nodal and
@@ -66,6 +72,9 @@ struct CheckOutcome {
     std::vector<SectionLine> sections;
     std::vector<std::vector<SectionStress>> section_stress; // [case][section], Results::cases order
     std::vector<PeakStress> peaks;                          // per case
+    std::vector<WeldLine> welds;
+    std::vector<std::vector<WeldForces>> weld_forces; // [case][weld line]
+    double element_size = 0;                          // the size the mesher used, mm
     CheckTable table;
     Convergence convergence;
     Timings seconds;

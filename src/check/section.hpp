@@ -35,6 +35,8 @@ struct SectionLine {
     int support = -1;                     // Connection::supports index (weld lines), or -1
     int row = -1;                         // bolt row of a net section, or -1
     double unclipped_length = 0; // whitmore: g + 2 L tan 30° before clipping, mm; else the length
+    double whitmore_gauge = 0;   // whitmore: g, the first row's outer bolt lines apart, mm
+    double whitmore_length = 0;  // whitmore: L, first row to last row along the member, mm
 
     double length() const { return (to - from).norm(); }
     double material_length() const {
@@ -79,6 +81,16 @@ struct SectionStress {
     double max_membrane_plus_bending = 0; // largest |membrane| + |bending|, MPa
     double max_peak = 0;
     std::vector<ProfilePoint> profile; // ordered by s, for the calc sheet's plots
+    // Stress points outside the mesh (true material beyond a straight Q4
+    // edge, or beyond a quadratic edge between its nodes on an arc) whose
+    // stress was extrapolated from the element next to them.
+    int extrapolated_points = 0;
+    // The same resultants from the element nodal forces k_e u_e on one side
+    // of the cut (a free body, exact to round-off by equilibrium), when the
+    // line cuts the plate in two or lies on its edge (weld lines); the
+    // difference from N, V, M is a figure of the stress integral's quality.
+    bool free_body = false;
+    double N_free_body = 0, V_free_body = 0, M_free_body = 0;
 };
 
 } // namespace lapwing::check

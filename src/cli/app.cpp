@@ -47,7 +47,8 @@ int run(int argc, char** argv) {
                          std::string("lapwing ") + LAPWING_VERSION + " (" + LAPWING_BUILD_ID + ")",
                          "Print the program version and build, then stop");
     app.require_subcommand(1, 1);
-    app.footer("Exit codes: 0 success, 2 bad input (every problem is listed with file:line).\n"
+    app.footer("Exit codes: 0 success, 1 a check fails (check), 2 bad input (every problem is "
+               "listed with file:line).\n"
                "Run `lapwing COMMAND --help` for the options of one command.");
 
     std::string kind, output;
@@ -110,6 +111,29 @@ int run(int argc, char** argv) {
         "what and where, e.g. a plate that can rotate about a single support bolt).\n"
         "Example: lapwing analyse G3.toml --set parameters.t=12");
 
+    CheckArgs check_args;
+    auto* check_cmd = app.add_subcommand(
+        "check", "Mesh, solve and check the plate; print the governing checks; write the calc "
+                 "sheet");
+    check_cmd->add_option("FILE", check_args.file, "Connection template (TOML)")->required();
+    check_cmd->add_option("--set", check_args.sets,
+                          "Override one key, KEY=VALUE (repeatable), as for validate");
+    check_cmd->add_option("-o,--output", check_args.output_folder,
+                          "Folder for the calc sheet and data files");
+    check_cmd->add_flag("--single-mesh", check_args.single_mesh,
+                        "Skip the second, finer mesh (no convergence evidence; quicker)");
+    check_cmd->add_flag("-q,--quiet", check_args.quiet, "Print nothing but errors");
+    check_cmd->add_flag("--json", check_args.json, "Print the summary as JSON");
+    check_cmd->add_flag("--reproducible", check_args.reproducible,
+                        "Fixed date in the outputs, so two runs give byte-identical files");
+    check_cmd->add_flag("--force", check_args.force,
+                        "Write into an output folder that holds files other than lapwing's");
+    check_cmd->footer(
+        "Exit codes: 0 every check passes, 1 a demand exceeds its capacity, 2 bad input or a\n"
+        "model that cannot be solved. Capacities are the allowables you enter; lapwing names\n"
+        "the method of each row and does not claim code compliance.\n"
+        "Example: lapwing check G3.toml -o G3-out");
+
 #ifdef LAPWING_HAS_VERIFY
     std::string example = "all";
     auto* verify_cmd = app.add_subcommand(
@@ -132,6 +156,11 @@ int run(int argc, char** argv) {
     if (new_cmd->parsed()) return run_new(kind, output, force, std::cout, std::cerr);
     if (mesh_cmd->parsed())
         return run_mesh(mesh_file, mesh_sets, mesh_folder, max_dofs, std::cout, std::cerr);
+    if (check_cmd->parsed()) {
+        for (int i = 0; i < argc; ++i)
+            check_args.command_line += (i ? " " : "") + std::string(argv[i]);
+        return run_check(check_args, std::cout, std::cerr);
+    }
     if (analyse_cmd->parsed())
         return run_analyse(analyse_file, analyse_sets, max_dofs, std::cout, std::cerr);
     if (validate_cmd->parsed()) return run_validate(file, sets, resolved, std::cout, std::cerr);

@@ -39,6 +39,22 @@ int run_mesh(const std::string& file, const std::vector<std::string>& sets,
 int run_analyse(const std::string& file, const std::vector<std::string>& sets, long max_dofs,
                 std::ostream& out, std::ostream& err);
 
+// `lapwing check FILE [--set ...] [-o DIR] ...`: the whole check; the
+// table's summary to `out`; the calc sheet and data files to DIR.
+// Exit 0 when every check passes, 1 when one fails, 2 for bad input.
+struct CheckArgs {
+    std::string file;
+    std::vector<std::string> sets;
+    std::string output_folder; // empty: no files, the terminal summary only
+    bool single_mesh = false;  // skip the convergence mesh
+    bool quiet = false;        // no summary, only errors
+    bool json = false;         // the summary as JSON on standard output
+    bool reproducible = false; // fixed date in outputs: two runs give identical files
+    bool force = false;        // reuse an output folder that holds other files
+    std::string command_line;  // as typed, for the calc sheet's traceability
+};
+int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err);
+
 // Prints every diagnostic of a lapwing::InputError (or any exception) and
 // gives the exit code. Used by every command.
 int report_failure(std::ostream& err);

@@ -81,6 +81,8 @@ struct Hole {
 enum class TieKind {
     spread,  // distributing tie over the whole hole edge; lets the hole deform
     bearing, // contact on the loaded half only
+    cosine,  // no tie: the classical equal share of the member's force, put on the hole as a
+             // cosine bearing pressure (members only; analysis/bearing_share.hpp)
 };
 
 enum class StiffnessKind { formula, given, rigid };
@@ -288,7 +290,7 @@ inline const std::vector<std::string> hole_kind_words{"standard", "oversized", "
                                                       "long_slot"};
 inline const std::vector<std::string> hole_rule_words{"metric", "inch"};
 inline const std::vector<std::string> slot_direction_words{"across", "along"};
-inline const std::vector<std::string> tie_words{"spread", "bearing"};
+inline const std::vector<std::string> tie_words{"spread", "bearing", "cosine"};
 inline const std::vector<std::string> stiffness_words{"formula", "given", "rigid"};
 inline const std::vector<std::string> support_words{"welded", "bolted", "symmetry"};
 inline const std::vector<std::string> style_words{"factor", "partial"};

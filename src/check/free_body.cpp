@@ -1,0 +1,185 @@
+// Free-body resultant across a section line: split the elements at the line
+// by their centroids, grow each side through uncut element edges, and sum
+// the element nodal forces k_e u_e at the nodes the two sides share.
+#include "check/free_body.hpp"
+
+#include "fe/element_matrix.hpp"
+#include "fe/material.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <map>
+#include <numeric>
+#include <set>
+
+namespace lapwing::check {
+
+namespace {
+
+using Eigen::Vector2d;
+
+double cross(const Vector2d& a, const Vector2d& b) {
+    return a.x() * b.y() - a.y() * b.x();
+}
+
+int find_root(std::vector<int>& parent, int i) {
+    while (parent[static_cast<size_t>(i)] != i) {
+        parent[static_cast<size_t>(i)] =
+            parent[static_cast<size_t>(parent[static_cast<size_t>(i)])];
+        i = parent[static_cast<size_t>(i)];
+    }
+    return i;
+}
+
+// Σ over `elements` of weight(e) times their nodal forces k_e u_e at the
+// nodes in `cut`, as a force and its moment about `centre`.
+template <typename Weight>
+void add_nodal_forces(const fe::Model& model, const Eigen::VectorXd& u,
+                      const std::vector<int>& elements, const std::vector<char>& cut,
+                      const Vector2d& centre, const Weight& weight, Vector2d& force,
+                      double& moment) {
+    fe::ElementMatrixStorage k;
+    Eigen::Matrix<double, 18, 1> u_e;
+    for (const int e : elements) {
+        const fe::Element& el = model.elements[static_cast<size_t>(e)];
+        const int n = fe::node_count(el.kind);
+        bool touches = false;
+        for (int i = 0; i < n; ++i)
+            touches = touches || cut[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
+        if (!touches) continue;
+        const fe::Matrix3 D = fe::plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
+        const int n_dofs = fe::element_stiffness(model, e, D, k);
+        for (int i = 0; i < n; ++i) {
+            const int node = el.nodes[static_cast<size_t>(i)];
+            u_e(2 * i) = u(fe::dof_ux(node));
+            u_e(2 * i + 1) = u(fe::dof_uy(node));
+        }
+        const Eigen::Matrix<double, 18, 1> f =
+            weight(e) * (k.topLeftCorner(n_dofs, n_dofs) * u_e.head(n_dofs));
+        for (int i = 0; i < n; ++i) {
+            const int node = el.nodes[static_cast<size_t>(i)];
+            if (!cut[static_cast<size_t>(node)]) continue;
+            const Vector2d fi(f(2 * i), f(2 * i + 1));
+            force += fi;
+            moment += cross(model.nodes[static_cast<size_t>(node)] - centre, fi);
+        }
+    }
+}
+
+} // namespace
+
+std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
+                                                     const fe::Model& model,
+                                                     const Eigen::VectorXd& u, double about) {
+    const double length = line.length();
+    if (length <= 0 || model.elements.empty()) return std::nullopt;
+    const Vector2d tangent = line.tangent(), normal = line.normal();
+    const Vector2d centre = line.from + about * tangent;
+    const double tol = 1e-8 * length;
+    const auto n_elements = static_cast<int>(model.elements.size());
+    std::vector<char> cut(model.nodes.size(), 0);
+    std::vector<int> body;
+    Vector2d force(0, 0);
+    double moment = 0;
+
+    if (line.kind == SectionKind::weld) {
+        // The whole plate; the nodes on the line carry the support's reaction.
+        for (size_t i = 0; i < model.nodes.size(); ++i) {
+            const Vector2d r = model.nodes[i] - line.from;
+            const double s = r.dot(tangent);
+            cut[i] = std::abs(r.dot(normal)) <= tol && s >= -tol && s <= length + tol;
+        }
+        body.resize(static_cast<size_t>(n_elements));
+        std::iota(body.begin(), body.end(), 0);
+        add_nodal_forces(
+            model, u, body, cut, centre, [](int) { return 1.0; }, force, moment);
+        if (force.norm() == 0 && moment == 0 &&
+            std::none_of(cut.begin(), cut.end(), [](char c) { return c != 0; }))
+            return std::nullopt;
+        // The nodal forces are the support's push on the plate; the traction
+        // σ·n with n into the plate acts on the support, hence the sign.
+        return FreeBodyResultant{-normal.dot(force), -tangent.dot(force), -moment, n_elements};
+    }
+
+    // Which side of the line each element's centroid lies on.
+    std::vector<Vector2d> centroid(static_cast<size_t>(n_elements));
+    std::vector<double> offset(static_cast<size_t>(n_elements));
+    for (int e = 0; e < n_elements; ++e) {
+        const fe::Element& el = model.elements[static_cast<size_t>(e)];
+        Vector2d c(0, 0);
+        for (int i = 0; i < 4; ++i)
+            c += model.nodes[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
+        centroid[static_cast<size_t>(e)] = 0.25 * c;
+        offset[static_cast<size_t>(e)] = normal.dot(0.25 * c - line.from);
+    }
+    // Neighbours across element edges (by corner pairs); an edge between
+    // centroids on opposite sides is cut when the segment joining the
+    // centroids crosses the line between its ends.
+    std::map<std::pair<int, int>, int> first_with_edge;
+    std::vector<int> parent(static_cast<size_t>(n_elements));
+    std::iota(parent.begin(), parent.end(), 0);
+    std::vector<std::pair<int, int>> cut_edges; // (element on −n side, element on +n side)
+    for (int e = 0; e < n_elements; ++e) {
+        const fe::Element& el = model.elements[static_cast<size_t>(e)];
+        for (int j = 0; j < 4; ++j) {
+            const auto key = std::minmax(el.nodes[static_cast<size_t>(j)],
+                                         el.nodes[static_cast<size_t>((j + 1) % 4)]);
+            const auto [it, fresh] = first_with_edge.emplace(key, e);
+            if (fresh) continue;
+            const int o = it->second;
+            const double de = offset[static_cast<size_t>(e)], dn = offset[static_cast<size_t>(o)];
+            bool crosses = false;
+            if ((de > 0) != (dn > 0)) {
+                const double lambda = de / (de - dn);
+                const Vector2d x =
+                    centroid[static_cast<size_t>(e)] +
+                    lambda * (centroid[static_cast<size_t>(o)] - centroid[static_cast<size_t>(e)]);
+                const double s = (x - line.from).dot(tangent);
+                crosses = s >= -tol && s <= length + tol;
+            }
+            if (crosses)
+                cut_edges.push_back(de > 0 ? std::pair{o, e} : std::pair{e, o});
+            else
+                parent[static_cast<size_t>(find_root(parent, e))] = find_root(parent, o);
+        }
+    }
+    if (cut_edges.empty()) return std::nullopt;
+    std::set<int> minus_side, plus_side;
+    for (const auto& [a, b] : cut_edges) {
+        minus_side.insert(find_root(parent, a));
+        plus_side.insert(find_root(parent, b));
+    }
+    for (const int r : minus_side)
+        if (plus_side.count(r)) return std::nullopt; // the two sides join round an end
+
+    std::vector<char> in_body(static_cast<size_t>(n_elements), 0);
+    for (int e = 0; e < n_elements; ++e)
+        if (minus_side.count(find_root(parent, e))) {
+            in_body[static_cast<size_t>(e)] = 1;
+            body.push_back(e);
+        }
+    std::vector<char> on_body(model.nodes.size(), 0), off_body(model.nodes.size(), 0);
+    for (int e = 0; e < n_elements; ++e) {
+        const fe::Element& el = model.elements[static_cast<size_t>(e)];
+        for (int i = 0; i < fe::node_count(el.kind); ++i)
+            (in_body[static_cast<size_t>(e)]
+                 ? on_body
+                 : off_body)[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])] = 1;
+    }
+    for (size_t i = 0; i < cut.size(); ++i) cut[i] = on_body[i] && off_body[i];
+    // Force on the body through the shared nodes: Σ_body k_e u_e there. A
+    // load applied at a shared node itself (a bolt tie on a hole edge that
+    // the line crosses) belongs to neither side; it is shared half and half,
+    // its limit as the mesh is refined, by taking the mean of the body's
+    // view (Σ_body) and the other side's (−Σ_rest):
+    //   F = ½ Σ_shared nodes (Σ_body k_e u_e − Σ_rest k_e u_e).
+    std::vector<int> all(static_cast<size_t>(n_elements));
+    std::iota(all.begin(), all.end(), 0);
+    add_nodal_forces(
+        model, u, all, cut, centre,
+        [&](int e) { return in_body[static_cast<size_t>(e)] ? 0.5 : -0.5; }, force, moment);
+    return FreeBodyResultant{normal.dot(force), tangent.dot(force), moment,
+                             static_cast<int>(body.size())};
+}
+
+} // namespace lapwing::check

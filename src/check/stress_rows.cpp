@@ -1,0 +1,66 @@
+// Check rows from the stress field: local peaks and weld forces against the
+// user's allowables (section rows join once the section lines exist).
+#include "check/evaluation.hpp"
+
+#include <fmt/format.h>
+
+namespace lapwing::check {
+
+namespace {
+
+// "peak_von_mises = 0.9*Fy = 310.5 MPa": the key, what the user typed and
+// its value, so the reviewer sees where the capacity came from.
+std::string allowable_text(const char* key, const model::Allowable& a, const char* unit) {
+    if (!a.given) return fmt::format("{} not set: shown for information", key);
+    if (a.source.empty()) return fmt::format("{} = {:.4g} {}", key, a.value, unit);
+    return fmt::format("{} = {} = {:.4g} {}", key, a.source, a.value, unit);
+}
+
+CheckRow user_row(std::string id, Family family, std::string what, std::string where,
+                  const std::string& load_case, const char* key, const model::Allowable& a,
+                  Quantity quantity, double demand) {
+    CheckRow r;
+    r.id = std::move(id);
+    r.family = family;
+    r.what = std::move(what);
+    r.where = std::move(where);
+    r.load_case = load_case;
+    r.method = "user allowable";
+    r.formula = allowable_text(key, a, quantity == Quantity::stress ? "MPa" : "N/mm");
+    r.quantity = quantity;
+    r.demand = demand;
+    r.capacity = a.given ? a.value : 0.0;
+    return r;
+}
+
+} // namespace
+
+std::vector<CheckRow> stress_rows(const model::Connection& c, const Evaluation& e) {
+    std::vector<CheckRow> rows;
+    const model::Allowables& al = c.allowables;
+    for (size_t k = 0; k < e.results.cases.size(); ++k) {
+        const std::string& lc = e.results.cases[k].name;
+        const PeakStress& p = e.peaks[k];
+        rows.push_back(user_row(fmt::format("peak:{}", lc), Family::peak_stress,
+                                "peak von Mises stress (local, mesh dependent)", p.near, lc,
+                                "peak_von_mises", al.peak_von_mises, Quantity::stress,
+                                p.von_mises));
+        for (size_t w = 0; w < e.welds.size(); ++w) {
+            const WeldLine& line = e.welds[w];
+            const WeldForces& f = e.weld_forces[k][w];
+            rows.push_back(user_row(fmt::format("{}:average:{}", line.id, lc), Family::weld,
+                                    "weld force per length, average over the weld", line.label, lc,
+                                    "weld_per_length", al.weld_per_length,
+                                    Quantity::force_per_length, f.average));
+            rows.push_back(
+                user_row(fmt::format("{}:peak:{}", line.id, lc), Family::weld,
+                         "weld force per length, highest element-edge average (local)",
+                         fmt::format("{}, {:.0f} mm from its start", line.label, f.peak_s), lc,
+                         "weld_per_length", al.weld_per_length, Quantity::force_per_length,
+                         f.peak_edge_average));
+        }
+    }
+    return rows;
+}
+
+} // namespace lapwing::check
