@@ -2,6 +2,7 @@
 // bolt forces, reactions and equilibrium figures.
 #include "analysis/analyse.hpp"
 
+#include "analysis/solution_checks.hpp"
 #include "core/error.hpp"
 #include "fe/linear_static.hpp"
 #include "fe/recovery.hpp"
@@ -135,7 +136,36 @@ void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& 
                 at.x(), at.y(), what));
         throw AnalysisError("the supports do not hold the plate: " + what);
     }
+    if (what.find("singular") != std::string::npos) {
+        // A given spring many orders stiffer than the plate makes the
+        // factorization fail in round-off: say so rather than "mechanism".
+        const double plate = c.material.E * c.plate.thickness; // N/mm, in-plane scale
+        for (const model::BoltGroup& g : c.bolt_groups)
+            if (g.stiffness == model::StiffnessKind::given && g.spring > 1e6 * plate)
+                throw AnalysisError(fmt::format(
+                    "the stiffness matrix is singular in working precision: the spring of bolt "
+                    "group \"{}\" ({:.3g} N/mm) is {:.1e} times the plate's in-plane stiffness "
+                    "E·t, which leaves the system too ill-conditioned to solve; use "
+                    "stiffness = \"formula\" or \"rigid\", or a spring nearer the plate's",
+                    g.name, g.spring, g.spring / plate));
+    }
     throw AnalysisError(what);
+}
+
+// The FE core's solve, with the load cases named when it fails (a solution
+// that is not finite).
+std::vector<fe::Solution> solve_named(const fe::LinearStaticProblem& solver,
+                                      std::span<const fe::Loads> loads,
+                                      const std::vector<CaseSpec>& specs,
+                                      const std::vector<size_t>& case_of) {
+    try {
+        return solver.solve(loads);
+    } catch (const AnalysisError& e) {
+        std::string names;
+        for (size_t i : case_of) names += (names.empty() ? "\"" : ", \"") + specs[i].name + "\"";
+        throw AnalysisError(fmt::format(
+            "{} {}: {}", case_of.size() == 1 ? "load case" : "load cases", names, e.what()));
+    }
 }
 
 } // namespace
@@ -167,6 +197,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         rethrow_in_connection_terms(c, p, e);
     }
     results.cases.resize(specs.size());
+    double rcond = solver->stats().factor.rcond;
     if (!p.has_contact) {
         // Linear: one factorization; combinations are factored sums.
         std::vector<fe::Loads> loads;
@@ -176,7 +207,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 loads.push_back(loads_for(c, mesh, p, specs[i].factors));
                 case_of.push_back(i);
             }
-        const auto solutions = solver->solve(loads);
+        const auto solutions = solve_named(*solver, loads, specs, case_of);
         std::map<std::string, const fe::Solution*> by_name;
         for (size_t k = 0; k < solutions.size(); ++k)
             by_name[specs[case_of[k]].name] = &solutions[k];
@@ -196,6 +227,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 s.relative_residual = std::max(s.relative_residual, it->second->relative_residual);
             }
             fill_case(c, p, working, s, specs[i].factors, out);
+            check_finite(out);
         }
     } else {
         // Bearing-only contact: each case and combination by its own active
@@ -250,20 +282,23 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 throw AnalysisError(
                     fmt::format("bearing contact in load case \"{}\" did not settle in {} passes",
                                 out.name, max_contact_iterations));
-            fe::Solution s = solver->solve(loads);
+            fe::Solution s = solve_named(*solver, std::span(&loads, 1), specs, {i}).front();
             if (!(s.relative_residual <= 1e-10)) {
                 try {
                     solver->refactorize(working);
                 } catch (const AnalysisError& e) {
                     rethrow_in_connection_terms(c, p, e);
                 }
-                s = solver->solve(loads);
+                s = solve_named(*solver, std::span(&loads, 1), specs, {i}).front();
             }
+            rcond = std::min(rcond, solver->stats().factor.rcond);
             start_set = active;
             out.contact_closed.assign(active.begin(), active.end());
             fill_case(c, p, working, s, specs[i].factors, out);
+            check_finite(out);
         }
     }
+    check_accuracy(results, rcond);
     results.seconds_solve =
         std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     return results;

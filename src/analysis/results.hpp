@@ -44,6 +44,10 @@ struct Results {
     FeProblem problem;
     std::vector<CaseResult> cases; // load cases in template order, then combinations
     double seconds_solve = 0;
+    // Numerical cautions for the calc sheet (ill-conditioning, a large
+    // residual); analysis/solution_checks.hpp gives the thresholds.
+    std::vector<std::string> warnings;
+    double reciprocal_condition = 0; // smallest estimate over the factorizations
 };
 
 } // namespace lapwing::analysis

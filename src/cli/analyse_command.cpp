@@ -3,6 +3,7 @@
 // the support reactions and the equilibrium figures. The checks and the
 // calc sheet build on this stage.
 #include "analysis/analyse.hpp"
+#include "analysis/resource_estimate.hpp"
 #include "cli/commands.hpp"
 #include "cli/files.hpp"
 #include "core/error.hpp"
@@ -14,12 +15,14 @@
 
 namespace lapwing::cli {
 
-int run_analyse(const std::string& file, const std::vector<std::string>& sets, std::ostream& out,
-                std::ostream& err) {
+int run_analyse(const std::string& file, const std::vector<std::string>& sets, long max_dofs,
+                std::ostream& out, std::ostream& err) {
     try {
         const auto c = input::load_connection(read_input_file(file), file, sets);
+        const auto settings = analysis::mesh_settings(c);
+        analysis::check_resources(analysis::estimate_resources(c, settings), settings, max_dofs);
         const auto layout = analysis::plate_layout(c);
-        const auto m = mesh::build_mesh(layout.region, analysis::mesh_settings(c));
+        const auto m = mesh::build_mesh(layout.region, settings);
         const auto r = analysis::analyse(c, m, layout);
         const auto force = [&](double newton) {
             return from_internal(newton, Quantity::force, c.units);
@@ -30,6 +33,7 @@ int run_analyse(const std::string& file, const std::vector<std::string>& sets, s
                            r.seconds_solve);
         out << "Linear-elastic plane-stress model: results are for review by the engineer of "
                "record.\n";
+        for (const auto& w : r.warnings) out << "warning: " << w << "\n";
         for (const auto& cr : r.cases) {
             out << fmt::format("\n{} {}: equilibrium residual {:.1e}, solver residual {:.1e}{}\n",
                                cr.combination ? "combination" : "load case", cr.name,

@@ -2,6 +2,7 @@
 // and the mapping of CLI11's own errors to the "bad input" exit code.
 #include "cli/app.hpp"
 
+#include "analysis/resource_estimate.hpp"
 #include "cli/commands.hpp"
 #include "cli/sweep_command.hpp"
 #include "core/error.hpp"
@@ -16,6 +17,17 @@
 namespace lapwing::cli {
 
 namespace {
+
+// --max-dofs for every command that meshes: one wording, one default.
+void add_max_dofs_option(CLI::App* command, long& max_dofs) {
+    command
+        ->add_option("--max-dofs", max_dofs,
+                     "Refuse a model estimated above N degrees of freedom before meshing "
+                     "(default " +
+                         std::to_string(analysis::default_max_dofs) +
+                         ", what fits a 24 GiB machine; about 2.5 kB of memory per dof)")
+        ->check(CLI::Range(1L, 2'000'000'000L));
+}
 
 std::string kinds_list() {
     std::string out = "Kinds:\n";
@@ -80,6 +92,8 @@ int run(int argc, char** argv) {
         "Override one key before meshing, KEY=VALUE (repeatable), as for validate");
     mesh_cmd->add_option("-o,--output", mesh_folder,
                          "Folder for mesh.svg and mesh.vtu (default: the current folder)");
+    long max_dofs = analysis::default_max_dofs;
+    add_max_dofs_option(mesh_cmd, max_dofs);
     mesh_cmd->footer(
         "Prints the element count and quality figures. The files are written through a temporary\n"
         "file and a rename; nothing is written when the input is bad (exit code 2).\n"
@@ -92,6 +106,7 @@ int run(int argc, char** argv) {
     analyse_cmd->add_option("FILE", analyse_file, "Connection template (TOML)")->required();
     analyse_cmd->add_option("--set", analyse_sets,
                             "Override one key, KEY=VALUE (repeatable), as for validate");
+    add_max_dofs_option(analyse_cmd, max_dofs);
     analyse_cmd->footer(
         "Exit codes: 0 solved, 2 bad input or a model that cannot be solved (the message says\n"
         "what and where, e.g. a plate that can rotate about a single support bolt).\n"
@@ -186,7 +201,7 @@ int run(int argc, char** argv) {
 
     if (new_cmd->parsed()) return run_new(kind, output, force, std::cout, std::cerr);
     if (mesh_cmd->parsed())
-        return run_mesh(mesh_file, mesh_sets, mesh_folder, std::cout, std::cerr);
+        return run_mesh(mesh_file, mesh_sets, mesh_folder, max_dofs, std::cout, std::cerr);
     if (check_cmd->parsed()) {
         for (int i = 0; i < argc; ++i)
             check_args.command_line += (i ? " " : "") + std::string(argv[i]);
@@ -199,7 +214,8 @@ int run(int argc, char** argv) {
     }
     if (merge_cmd->parsed())
         return run_merge(merge_files, merge_output, merge_expect, std::cout, std::cerr);
-    if (analyse_cmd->parsed()) return run_analyse(analyse_file, analyse_sets, std::cout, std::cerr);
+    if (analyse_cmd->parsed())
+        return run_analyse(analyse_file, analyse_sets, max_dofs, std::cout, std::cerr);
     if (validate_cmd->parsed()) return run_validate(file, sets, resolved, std::cout, std::cerr);
 #ifdef LAPWING_HAS_VERIFY
     if (verify_cmd->parsed()) return run_verify(example, std::cout);

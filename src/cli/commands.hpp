@@ -26,16 +26,18 @@ int run_new(const std::string& kind, const std::string& file, bool force, std::o
 int run_validate(const std::string& file, const std::vector<std::string>& sets, bool resolved,
                  std::ostream& out, std::ostream& err);
 
-// `lapwing mesh FILE [--set ...] [-o DIR]`: meshes the plate and writes
-// DIR/mesh.svg and DIR/mesh.vtu atomically (DIR defaults to ".").
+// `lapwing mesh FILE [--set ...] [-o DIR] [--max-dofs N]`: meshes the plate
+// and writes DIR/mesh.svg and DIR/mesh.vtu atomically (DIR defaults to ".").
+// A model estimated above `max_dofs` is refused before meshing (exit 2).
 int run_mesh(const std::string& file, const std::vector<std::string>& sets,
-             const std::string& folder, std::ostream& out, std::ostream& err);
+             const std::string& folder, long max_dofs, std::ostream& out, std::ostream& err);
 
-// `lapwing analyse FILE [--set ...]`: meshes and solves every load case and
-// combination; prints bolt forces, reactions and equilibrium residuals.
-// Exit 2 for bad input or a model that cannot be solved.
-int run_analyse(const std::string& file, const std::vector<std::string>& sets, std::ostream& out,
-                std::ostream& err);
+// `lapwing analyse FILE [--set ...] [--max-dofs N]`: meshes and solves every
+// load case and combination; prints bolt forces, reactions, equilibrium
+// residuals and any numerical warnings. Exit 2 for bad input, a model that
+// cannot be solved or one estimated above `max_dofs`.
+int run_analyse(const std::string& file, const std::vector<std::string>& sets, long max_dofs,
+                std::ostream& out, std::ostream& err);
 
 // `lapwing check FILE [--set ...] [-o DIR] ...`: the whole check; the
 // table's summary to `out`; the calc sheet and data files to DIR.

@@ -36,32 +36,39 @@ std::string read_input_file(const fs::path& path) {
 }
 
 void write_atomically(const fs::path& path, const std::string& content) {
+    write_atomically(path, content,
+                     [](std::ostream& out, const std::string& text) { out << text; });
+}
+
+void write_atomically(const fs::path& path, const std::string& content,
+                      const ContentWriter& write) {
+    const std::string name = path.string();
     const fs::path folder = path.has_parent_path() ? path.parent_path() : fs::path(".");
     if (std::error_code ec; !fs::is_directory(folder, ec)) {
-        throw std::runtime_error("cannot write " + path.string() + ": there is no folder " +
-                                 folder.string());
+        throw OutputError("cannot write " + name + ": there is no folder " + folder.string());
     }
     const fs::path temporary =
         folder / ("." + path.filename().string() + ".tmp-" + std::to_string(::getpid()));
+    const auto give_up = [&](const std::string& why) {
+        std::error_code ignored;
+        fs::remove(temporary, ignored);
+        throw OutputError("cannot write " + name + ": " + why + "; nothing was written there");
+    };
     {
+        errno = 0;
         std::ofstream out(temporary, std::ios::binary | std::ios::trunc);
-        if (!out)
-            throw std::runtime_error("cannot write " + path.string() + ": " + std::strerror(errno));
-        out << content;
+        if (!out) give_up(errno ? std::strerror(errno) : "the file cannot be created");
+        write(out, content);
+        out.flush();
+        const int write_errno = errno;
         out.close();
-        if (!out) {
-            std::error_code ignored;
-            fs::remove(temporary, ignored);
-            throw std::runtime_error("cannot write " + path.string());
-        }
+        if (!out)
+            give_up(write_errno ? std::strerror(write_errno)
+                                : "the write failed (is the disk full?)");
     }
     std::error_code ec;
     fs::rename(temporary, path, ec);
-    if (ec) {
-        std::error_code ignored;
-        fs::remove(temporary, ignored);
-        throw std::runtime_error("cannot write " + path.string() + ": " + ec.message());
-    }
+    if (ec) give_up(ec.message());
 }
 
 } // namespace lapwing::cli

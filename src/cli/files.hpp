@@ -3,6 +3,8 @@
 #pragma once
 
 #include <filesystem>
+#include <functional>
+#include <ostream>
 #include <string>
 
 namespace lapwing::cli {
@@ -12,7 +14,16 @@ namespace lapwing::cli {
 std::string read_input_file(const std::filesystem::path& path);
 
 // Writes `content` to `path` through a temporary file in the same folder and
-// a rename, so a reader never sees half a file. Throws std::runtime_error.
+// a rename, so a reader never sees half a file. On any failure (no such
+// folder, no permission, a failed write such as a full disk, a failed
+// rename) throws lapwing::OutputError naming the file and why, and leaves
+// neither the temporary file nor a changed `path` behind.
 void write_atomically(const std::filesystem::path& path, const std::string& content);
+
+// The same, with the bytes written by `write` (a seam for tests: a writer
+// that fails half-way stands in for a full disk).
+using ContentWriter = std::function<void(std::ostream& out, const std::string& content)>;
+void write_atomically(const std::filesystem::path& path, const std::string& content,
+                      const ContentWriter& write);
 
 } // namespace lapwing::cli

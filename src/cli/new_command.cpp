@@ -31,9 +31,9 @@ int run_new(const std::string& kind, const std::string& file, bool force, std::o
     }
     try {
         write_atomically(file, chosen->text);
-    } catch (const std::exception& e) {
+    } catch (const OutputError& e) {
         err << "lapwing new: " << e.what() << "\n";
-        return static_cast<int>(ExitCode::bad_input);
+        return static_cast<int>(ExitCode::output_failed);
     }
     err << "wrote " << file << " (" << chosen->description << ")\n";
     return 0;

@@ -14,6 +14,9 @@ int report_failure(std::ostream& err) {
     } catch (const InputError& e) {
         err << input::format_problems(e);
         return static_cast<int>(ExitCode::bad_input);
+    } catch (const OutputError& e) {
+        err << "error: " << e.what() << "\n";
+        return static_cast<int>(ExitCode::output_failed);
     } catch (const AnalysisError& e) {
         err << "error: " << e.what() << "\n";
         return static_cast<int>(ExitCode::bad_input);

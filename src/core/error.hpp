@@ -13,6 +13,9 @@ enum class ExitCode : int {
     all_pass = 0,     // every check passed
     check_failed = 1, // at least one demand/capacity ratio exceeds 1
     bad_input = 2,    // bad input, or a model that cannot be solved
+    // An output could not be written (no such folder, no permission, disk
+    // full): the analysis may be fine, but nothing half-written is left.
+    output_failed = 3,
 };
 
 // One problem in the input, located as precisely as the stage knows it.
@@ -44,6 +47,13 @@ private:
 // singular system, a mesher failure. The message names the element, node or
 // region.
 class AnalysisError : public std::runtime_error {
+public:
+    using std::runtime_error::runtime_error;
+};
+
+// An output file that could not be written; the message names the file and
+// why. Gives ExitCode::output_failed.
+class OutputError : public std::runtime_error {
 public:
     using std::runtime_error::runtime_error;
 };

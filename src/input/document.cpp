@@ -115,7 +115,7 @@ Node convert(const toml::value& v, std::string_view file_name) {
     case toml::value_t::table: {
         n.kind = Node::Kind::table;
         for (const auto& [key, child] : v.as_table())
-            n.entries.emplace_back(key, convert(child, file_name));
+            n.entries.push_back({key, convert(child, file_name)});
         // toml11 keeps tables unordered; file order makes messages and summaries stable.
         std::sort(n.entries.begin(), n.entries.end(), [](const auto& a, const auto& b) {
             if (a.second.origin.line != b.second.origin.line)
@@ -172,8 +172,60 @@ toml::value parse_text(std::string_view text, const std::string& file_name) {
 
 } // namespace
 
+// Offset of the first byte that does not start or continue a valid UTF-8
+// sequence (RFC 3629: no overlong forms, no surrogates, at most U+10FFFF),
+// or npos. Checked before toml11 sees the text: toml11 3.7.1 reads past the
+// end of its buffer when it reports invalid UTF-8 inside a multi-line
+// literal string (found by tests/fuzz/fuzz_pipeline).
+static size_t invalid_utf8_at(std::string_view text) {
+    size_t i = 0;
+    while (i < text.size()) {
+        const auto c = static_cast<unsigned char>(text[i]);
+        size_t n = 0;
+        unsigned low = 0x80, high = 0xBF;
+        if (c < 0x80)
+            n = 0;
+        else if (c >= 0xC2 && c <= 0xDF)
+            n = 1;
+        else if (c == 0xE0)
+            n = 2, low = 0xA0;
+        else if (c >= 0xE1 && c <= 0xEC)
+            n = 2;
+        else if (c == 0xED)
+            n = 2, high = 0x9F;
+        else if (c >= 0xEE && c <= 0xEF)
+            n = 2;
+        else if (c == 0xF0)
+            n = 3, low = 0x90;
+        else if (c >= 0xF1 && c <= 0xF3)
+            n = 3;
+        else if (c == 0xF4)
+            n = 3, high = 0x8F;
+        else
+            return i;
+        for (size_t k = 1; k <= n; ++k) {
+            if (i + k >= text.size()) return i;
+            const auto d = static_cast<unsigned char>(text[i + k]);
+            if (d < (k == 1 ? low : 0x80) || d > (k == 1 ? high : 0xBF)) return i;
+        }
+        i += n + 1;
+    }
+    return std::string_view::npos;
+}
+
 Node parse_document(std::string_view text, std::string_view file_name) {
     const std::string name(file_name);
+    if (const size_t bad = invalid_utf8_at(text); bad != std::string_view::npos) {
+        const size_t line_start = text.rfind('\n', bad == 0 ? 0 : bad - 1);
+        const size_t begin = line_start == std::string_view::npos || bad == 0 ? 0 : line_start + 1;
+        Diagnostic d;
+        d.file = name;
+        d.line = 1 + static_cast<int>(
+                         std::count(text.begin(), text.begin() + static_cast<long>(bad), '\n'));
+        d.column = 1 + static_cast<int>(bad - begin);
+        d.message = "is not valid UTF-8 text here (a template must be UTF-8)";
+        throw InputError(d);
+    }
     toml::value root;
     try {
         root = parse_text(text, name);
@@ -204,6 +256,8 @@ Node parse_document(std::string_view text, std::string_view file_name) {
 Node parse_override_value(std::string_view text, const Origin& origin) {
     Node value;
     try {
+        if (invalid_utf8_at(text) != std::string_view::npos)
+            throw std::runtime_error("not UTF-8"); // taken as plain text, like any non-TOML value
         const auto root = parse_text(std::string("value = ") + std::string(text), origin.file);
         value = convert(toml::find(root, "value"), origin.file);
     } catch (const std::exception&) {

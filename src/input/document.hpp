@@ -19,14 +19,15 @@ struct Origin {
 };
 
 struct Node {
+    struct Entry; // (key, value); a struct, as std::pair of an incomplete Node is not portable
     enum class Kind { table, array, string, integer, floating, boolean, datetime };
     Kind kind = Kind::table;
     std::string text; // string value, or the TOML text of a date-time
     std::int64_t integer = 0;
     double floating = 0.0;
     bool boolean = false;
-    std::vector<std::pair<std::string, Node>> entries; // tables, in file order
-    std::vector<Node> items;                           // arrays
+    std::vector<Entry> entries; // tables, in file order
+    std::vector<Node> items;    // arrays
     Origin origin;
 
     const Node* find(std::string_view key) const;
@@ -35,6 +36,11 @@ struct Node {
     double number() const {
         return kind == Kind::integer ? static_cast<double>(integer) : floating;
     }
+};
+
+struct Node::Entry {
+    std::string first; // key
+    Node second;       // value
 };
 
 // "table", "integer", … for messages.

@@ -80,7 +80,7 @@ void apply_override(Node& root, const std::string& argument, Context& context) {
             Node fresh;
             fresh.kind = Node::Kind::table;
             fresh.origin = origin;
-            at->entries.emplace_back(part, std::move(fresh));
+            at->entries.push_back({part, std::move(fresh)});
             next = &at->entries.back().second;
         }
         if (index) {

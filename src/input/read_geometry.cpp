@@ -61,6 +61,10 @@ void read_plate(Table& root, model::Plate& plate, PlateOrigins& origins) {
         context.report(outline->origin, t.path_of("outline"),
                        fmt::format("= {}: must list at least 3 corners {{ x = ..., y = ... }}",
                                    show(*outline)));
+    } else if (outline->items.size() > max_polygon_points) {
+        context.report(outline->origin, t.path_of("outline"),
+                       fmt::format("lists {} corners: lapwing takes at most {} per outline",
+                                   outline->items.size(), max_polygon_points));
     } else {
         std::set<std::string> edge_names;
         for (size_t i = 0; i < outline->items.size(); ++i) {
@@ -108,6 +112,10 @@ void read_plate(Table& root, model::Plate& plate, PlateOrigins& origins) {
         } else if (points->kind != Node::Kind::array || points->items.size() < 3) {
             context.report(points->origin, c.path_of("points"),
                            fmt::format("= {}: must list at least 3 points [x, y]", show(*points)));
+        } else if (points->items.size() > max_polygon_points) {
+            context.report(points->origin, c.path_of("points"),
+                           fmt::format("lists {} points: lapwing takes at most {} per cut-out",
+                                       points->items.size(), max_polygon_points));
         } else {
             for (size_t i = 0; i < points->items.size(); ++i) {
                 if (auto p = read_point(points->items[i],
@@ -127,6 +135,8 @@ void read_bolt_groups(Table& root, model::Connection& connection, PlateOrigins& 
     Context& context = root.context();
     const size_t before = context.problems.size();
     std::set<std::string> names;
+    long n_bolts = 0;
+    bool too_many_reported = false;
     for (auto& g : root.tables("bolt_group")) {
         model::BoltGroup group;
         group.name = g.text("name", std::nullopt).value_or("");
@@ -223,6 +233,17 @@ void read_bolt_groups(Table& root, model::Connection& connection, PlateOrigins& 
                 "is used only with stiffness = \"given\": remove it or set stiffness = \"given\"");
         }
         g.finish();
+        // Refused here, before the pairwise hole checks and the mesher see
+        // them: no connection plate has this many holes, and the refusal
+        // names the group that crosses the limit.
+        n_bolts += static_cast<long>(group.rows) * group.lines;
+        if (n_bolts > max_bolts && !too_many_reported) {
+            too_many_reported = true;
+            g.report(g.origin(), g.path(),
+                     fmt::format("brings the bolt count to {}: lapwing takes at most {} bolts in "
+                                 "all (check rows and lines)",
+                                 n_bolts, max_bolts));
+        }
         connection.bolt_groups.push_back(group);
         origins.bolt_groups.push_back(g.origin());
     }

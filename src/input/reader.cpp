@@ -79,6 +79,13 @@ std::optional<double> read_number(const Node& node, const std::string& key_path,
                                    shown, with_article(node.kind)));
         return std::nullopt;
     }
+    // Every bound stops at ±1e300 so that unit conversion cannot overflow;
+    // a number past it gets its own words rather than an empty range.
+    if (std::abs(value) > 1e300) {
+        context.report(node.origin, key_path,
+                       fmt::format("= {}: is out of range (at most 1e300 in size)", shown));
+        return std::nullopt;
+    }
     if (!bound.holds(value)) {
         context.report(
             node.origin, key_path,

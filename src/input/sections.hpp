@@ -29,6 +29,13 @@ void read_parameters(Table& root, Context& context, std::map<std::string, double
 void read_material(Table& root, model::Material& material);
 
 void read_plate(Table& root, model::Plate& plate, PlateOrigins& origins);
+// More bolts than this in all groups together is refused as absurd input
+// (a large splice has a few hundred; 10⁴ holes would mean a mesh of millions
+// of elements before anything useful is known).
+inline constexpr long max_bolts = 10000;
+// Corners of the outline or points of one cut-out, for the same reason (the
+// shape checks compare every pair of segments).
+inline constexpr size_t max_polygon_points = 2000;
 void read_bolt_groups(Table& root, model::Connection& connection, PlateOrigins& origins);
 
 // Actions: load cases first, then members, supports, edge loads, combinations.
