@@ -6,38 +6,62 @@
 
 #include "fe/isoparametric_map.hpp"
 #include "fe/quadrature.hpp"
+#include "fe/shape_functions.hpp"
 
 #include <algorithm>
 #include <array>
 #include <cmath>
 #include <numbers>
+#include <vector>
 
 namespace lapwing::mesh {
+
+namespace {
+
+// Reference derivatives of the n-node shape functions at the sample points
+// (the 9-node lattice of the reference square and the element's stiffness
+// quadrature points, as fe::check_element_map), computed once per kind.
+template <int n>
+struct Samples {
+    std::vector<fe::ShapeDerivatives<n>> dN_dxi;
+    Samples() {
+        for (int i = 0; i < 9; ++i) {
+            const fe::Vector2 r = fe::reference_node(i);
+            dN_dxi.push_back(fe::shape<n>(r.x(), r.y()).dN_dxi);
+        }
+        const fe::SquareRule rule = fe::gauss_square(n == 4 ? 2 : 3); // fe::gauss_order
+        for (int q = 0; q < rule.n_points; ++q)
+            dN_dxi.push_back(fe::shape<n>(rule.points[q].xi, rule.points[q].eta).dN_dxi);
+    }
+};
+
+// min det J / max det J over the samples; -1 if det J is nowhere positive.
+template <int n>
+double scaled_jacobian(const std::array<fe::Vector2, 9>& coords) {
+    static const Samples<n> samples;
+    fe::NodeCoords<n> X;
+    for (int i = 0; i < n; ++i) X.row(i) = coords[i].transpose();
+    double lo = HUGE_VAL, hi = -HUGE_VAL;
+    for (const auto& dN : samples.dN_dxi) {
+        const double det = (X.transpose() * dN).determinant(); // J = Xᵀ · dN_dxi
+        lo = std::min(lo, det);
+        hi = std::max(hi, det);
+    }
+    return hi > 0 ? lo / hi : -1.0;
+}
+
+} // namespace
 
 ElementQuality element_quality(const Mesh& mesh, int e) {
     const auto nodes = mesh.element(e);
     const int n = static_cast<int>(nodes.size());
     std::array<fe::Vector2, 9> coords;
     for (int i = 0; i < n; ++i) coords[i] = mesh.nodes[nodes[i]];
-    const std::span<const fe::Vector2> x(coords.data(), static_cast<size_t>(n));
 
-    // Sample points: the 9-node lattice of the reference square and the
-    // element's stiffness quadrature points (as fe::check_element_map).
-    double lo = HUGE_VAL, hi = -HUGE_VAL;
-    for (int i = 0; i < 9; ++i) {
-        const fe::Vector2 r = fe::reference_node(i);
-        const double det = fe::det_J_at(mesh.kind, x, r.x(), r.y());
-        lo = std::min(lo, det);
-        hi = std::max(hi, det);
-    }
-    const fe::SquareRule rule = fe::gauss_square(fe::gauss_order(mesh.kind));
-    for (int q = 0; q < rule.n_points; ++q) {
-        const double det = fe::det_J_at(mesh.kind, x, rule.points[q].xi, rule.points[q].eta);
-        lo = std::min(lo, det);
-        hi = std::max(hi, det);
-    }
     ElementQuality q;
-    q.scaled_jacobian = hi > 0 ? lo / hi : -1.0;
+    q.scaled_jacobian = n == 4   ? scaled_jacobian<4>(coords)
+                        : n == 8 ? scaled_jacobian<8>(coords)
+                                 : scaled_jacobian<9>(coords);
     double min_angle = 360.0, max_angle = 0.0, min_edge = HUGE_VAL, max_edge = 0.0;
     for (int k = 0; k < 4; ++k) {
         const Eigen::Vector2d p = coords[k];

@@ -3,6 +3,7 @@
 // is kept only if it does not worsen the adjacent elements).
 #include "fe/isoparametric_map.hpp"
 #include "fe/quadrature.hpp"
+#include "fe/shape_functions.hpp"
 #include "mesh/quad_split.hpp"
 
 #include <algorithm>
@@ -52,25 +53,38 @@ double straight_metric(const std::vector<Eigen::Vector2d>& x, const int* q) {
     return combine(c.ratio, c.sine);
 }
 
-// The same with a curved edge: det J of the eight-node map at the 3×3 Gauss
-// points and the nodes, mid-sides on the curve where given.
+// Reference derivatives of the eight-node shape functions at the sample
+// points of the quality figures (the 9-node lattice and the 3×3 Gauss
+// points), computed once: the metric runs thousands of times per mesh.
+struct Q8Samples {
+    std::array<fe::ShapeDerivatives<8>, 18> dN_dxi;
+    Q8Samples() {
+        for (int i = 0; i < 9; ++i)
+            dN_dxi[i] = fe::shape_q8(fe::reference_node(i).x(), fe::reference_node(i).y()).dN_dxi;
+        const fe::SquareRule rule = fe::gauss_square(3);
+        for (int k = 0; k < 9; ++k)
+            dN_dxi[9 + k] = fe::shape_q8(rule.points[k].xi, rule.points[k].eta).dN_dxi;
+    }
+};
+
+// The same with a curved edge: det J of the eight-node map at those sample
+// points, mid-sides on the curve where given.
 double curved_metric(const std::vector<Eigen::Vector2d>& x, const int* q,
                      const Eigen::Vector2d* mid) {
-    std::array<fe::Vector2, 8> c;
+    static const Q8Samples samples;
+    fe::NodeCoords<8> X;
     for (int k = 0; k < 4; ++k) {
-        c[k] = x[q[k]];
-        c[4 + k] =
-            std::isnan(mid[k].x()) ? Eigen::Vector2d(0.5 * (x[q[k]] + x[q[(k + 1) % 4]])) : mid[k];
+        X.row(k) = x[q[k]].transpose();
+        X.row(4 + k) =
+            (std::isnan(mid[k].x()) ? Eigen::Vector2d(0.5 * (x[q[k]] + x[q[(k + 1) % 4]])) : mid[k])
+                .transpose();
     }
     double lo = HUGE_VAL, hi = -HUGE_VAL;
-    const auto sample = [&](double xi, double eta) {
-        const double d = fe::det_J_at(fe::ElementKind::Q8, c, xi, eta);
+    for (const auto& dN : samples.dN_dxi) {
+        const double d = (X.transpose() * dN).determinant(); // det J, J = Xᵀ · dN_dxi
         lo = std::min(lo, d);
         hi = std::max(hi, d);
-    };
-    for (int i = 0; i < 9; ++i) sample(fe::reference_node(i).x(), fe::reference_node(i).y());
-    const fe::SquareRule rule = fe::gauss_square(3);
-    for (int k = 0; k < rule.n_points; ++k) sample(rule.points[k].xi, rule.points[k].eta);
+    }
     const Corners straight = corners(x, q);
     return combine(std::min(hi > 0 ? lo / hi : -1.0, straight.ratio), straight.sine);
 }
@@ -127,18 +141,28 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
 
     // Local optimisation where smoothing left a poor element: compass
     // search on each free corner of it, maximising the worst adjacent metric.
+    // Each node is searched at most once per round, and the search stops once
+    // every adjacent element clears the selection mark.
+    constexpr double good = 1.2;
     const auto worst_at = [&](int v) {
         double w = HUGE_VAL;
         for (int i = start[v]; i < start[v + 1]; ++i)
             w = std::min(w, quad_metric(nodes, &quads[4 * list[i]]));
         return w;
     };
+    constexpr double s45 = 0.7071067811865476; // the eight compass directions
+    static const std::array<Eigen::Vector2d, 8> compass{
+        Eigen::Vector2d(1, 0),      Eigen::Vector2d(s45, s45), Eigen::Vector2d(0, 1),
+        Eigen::Vector2d(-s45, s45), Eigen::Vector2d(-1, 0),    Eigen::Vector2d(-s45, -s45),
+        Eigen::Vector2d(0, -1),     Eigen::Vector2d(s45, -s45)};
+    std::vector<int> searched(n_nodes, -1); // round in which the node was last searched
     for (int round = 0; round < 3; ++round) {
         for (int q = 0; q < n_quads; ++q) {
-            if (quad_metric(nodes, &quads[4 * q]) >= 1.2) continue;
+            if (quad_metric(nodes, &quads[4 * q]) >= good) continue;
             for (int k = 0; k < 4; ++k) {
                 const int v = quads[4 * q + k];
-                if (fixed[v]) continue;
+                if (fixed[v] || searched[v] == round) continue;
+                searched[v] = round;
                 double best = worst_at(v);
                 double step = 0.0;
                 for (int i = start[v]; i < start[v + 1]; ++i) {
@@ -147,12 +171,11 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
                         step += (nodes[qq[(c + 1) % 4]] - nodes[qq[c]]).norm();
                 }
                 step *= 0.1 / (4.0 * (start[v + 1] - start[v]));
-                for (int iter = 0; iter < 12 && step > 0; ++iter) {
+                for (int iter = 0; iter < 12 && step > 0 && best < good; ++iter) {
                     const Eigen::Vector2d base = nodes[v];
                     Eigen::Vector2d best_pos = base;
-                    for (int d = 0; d < 8; ++d) {
-                        const double angle = d * 0.7853981633974483;
-                        nodes[v] = base + step * Eigen::Vector2d(std::cos(angle), std::sin(angle));
+                    for (const Eigen::Vector2d& d : compass) {
+                        nodes[v] = base + step * d;
                         const double w = worst_at(v);
                         if (w > best) {
                             best = w;

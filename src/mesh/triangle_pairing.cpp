@@ -5,11 +5,12 @@
 #include "mesh/triangle_pairing.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 
 namespace lapwing::mesh::detail {
 
-double polygon_split_score(const std::vector<Point>& p, const std::vector<Point>& edge_point) {
+double polygon_split_score(std::span<const Point> p, std::span<const Point> edge_point) {
     const size_t n = p.size();
     Point o = Point::Zero();
     for (const Point& x : p) o += x;
@@ -60,10 +61,11 @@ double merge_score(const Triangulation& tri, const std::vector<geometry::Curve>&
     while (U.v[ua] != a) ++ua;
     while (U.v[ub] != b) ++ub;
     const auto& P = tri.points();
-    return polygon_split_score({P[T.v[e]], P[a], P[U.v[w]], P[b]},
-                               {edge_point(tri, curves, t, (e + 2) % 3),
-                                edge_point(tri, curves, u, ub), edge_point(tri, curves, u, ua),
-                                edge_point(tri, curves, t, (e + 1) % 3)});
+    const std::array<Point, 4> corners{P[T.v[e]], P[a], P[U.v[w]], P[b]};
+    const std::array<Point, 4> splits{
+        edge_point(tri, curves, t, (e + 2) % 3), edge_point(tri, curves, u, ub),
+        edge_point(tri, curves, u, ua), edge_point(tri, curves, t, (e + 1) % 3)};
+    return polygon_split_score(corners, splits);
 }
 
 } // namespace

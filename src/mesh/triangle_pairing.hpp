@@ -7,6 +7,7 @@
 #include "geometry/curve.hpp"
 #include "mesh/triangulation.hpp"
 
+#include <span>
 #include <vector>
 
 namespace lapwing::mesh::detail {
@@ -25,7 +26,7 @@ struct Pairing {
 // mean of its corners: the worst quadrilateral's corner det J ratio (min /
 // max of its corner cross products; 1 for a parallelogram), or -1 if an angle
 // falls outside [30°, 150°].
-double polygon_split_score(const std::vector<Point>& p, const std::vector<Point>& edge_point);
+double polygon_split_score(std::span<const Point> p, std::span<const Point> edge_point);
 
 Pairing pair_triangles(const Triangulation& tri, const std::vector<geometry::Curve>& curves);
 

@@ -1,12 +1,14 @@
 // Mesher benchmark: quadrilaterals per second on plates of about 10³ to 10⁶
 // elements, and peak resident memory (getrusage). Run a few times and quote
-// medians: `build/bench/tests/bench/mesh/mesh_bench [repeats]`.
+// medians: `build/bench/tests/bench/mesh/mesh_bench [repeats] [small]`
+// (size 0.00 in the table is the small plate at its default element size).
 #include "mesh/mesh.hpp"
 
 #include <algorithm>
 #include <chrono>
 #include <cstdio>
 #include <cstdlib>
+#include <string_view>
 #include <sys/resource.h>
 #include <vector>
 
@@ -27,6 +29,15 @@ geometry::PlateRegion plate() {
     return r;
 }
 
+// A 240 × 160 splice-like plate with two d 22 holes and a chamfer: about
+// 10³ elements at the default settings' element size for it (16 mm).
+geometry::PlateRegion small_plate() {
+    geometry::PlateRegion r;
+    r.outline = {{{0, 0}}, {{240, 0}}, {{240, 160}, 20, 0}, {{0, 160}}};
+    r.holes = {geometry::Hole::circle({80, 80}, 22), geometry::Hole::circle({160, 80}, 22)};
+    return r;
+}
+
 double peak_rss_mb() {
     rusage u{};
     getrusage(RUSAGE_SELF, &u);
@@ -39,16 +50,20 @@ int main(int argc, char** argv) {
     const int repeats = argc > 1 ? std::atoi(argv[1]) : 3;
     std::printf("%10s %6s %12s %12s %14s %12s\n", "size_mm", "kind", "elements", "median_s",
                 "quads_per_s", "peak_rss_MB");
-    for (double size : {40.0, 12.0, 4.0, 1.2, 0.55}) {
+    // Only the small plate with a second argument "small" (for profiling).
+    const bool only_small = argc > 2 && std::string_view(argv[2]) == "small";
+    for (double size : {0.0, 40.0, 12.0, 4.0, 1.2, 0.55}) {
+        if (only_small && size > 0) break;
         for (auto kind : {fe::ElementKind::Q4, fe::ElementKind::Q8}) {
             mesh::MeshSettings s;
             s.kind = kind;
-            s.element_size = size;
+            s.element_size = size; // 0: the small plate at its default size
+            const geometry::PlateRegion region = size > 0 ? plate() : small_plate();
             std::vector<double> times;
             int n = 0;
             for (int k = 0; k < repeats; ++k) {
                 const auto t0 = std::chrono::steady_clock::now();
-                const mesh::Mesh m = mesh::build_mesh(plate(), s);
+                const mesh::Mesh m = mesh::build_mesh(region, s);
                 const auto t1 = std::chrono::steady_clock::now();
                 times.push_back(std::chrono::duration<double>(t1 - t0).count());
                 n = m.n_elements();
