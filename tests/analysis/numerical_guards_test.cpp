@@ -7,6 +7,7 @@
 #include "fe/structured_grid.hpp"
 #include "run_connection.hpp"
 
+#include <string>
 #include <doctest/doctest.h>
 #include <filesystem>
 #include <fmt/format.h>
@@ -49,10 +50,19 @@ TEST_CASE("springs 1e12 times stiffer than the plate: refused as too ill-conditi
                          lapwing::AnalysisError);
 }
 
-TEST_CASE("springs 1e15 times stiffer than the plate: refused, naming the spring") {
-    CHECK_THROWS_WITH_AS(lapwing::test::run_connection(web_splice(), stiff_springs(1e15)),
-                         doctest::Contains("is 1.0e+15 times the plate's in-plane stiffness"),
-                         lapwing::AnalysisError);
+// Whether the factorization breaks down (and the message names the spring)
+// or completes with a useless residual depends on round-off in the
+// factorization (it differs between builds); either way the model is refused.
+TEST_CASE("springs 1e15 times stiffer than the plate: refused") {
+    std::string message;
+    try {
+        (void)lapwing::test::run_connection(web_splice(), stiff_springs(1e15));
+    } catch (const lapwing::AnalysisError& e) {
+        message = e.what();
+    }
+    CAPTURE(message);
+    CHECK((message.find("is 1.0e+15 times the plate's in-plane stiffness") != std::string::npos ||
+           message.find("the model is too ill-conditioned to trust") != std::string::npos));
 }
 
 TEST_CASE("springs 1e9 times stiffer than the plate: solved, with a warning") {
