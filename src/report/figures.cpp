@@ -6,10 +6,23 @@
 #include "report/text_format.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <fmt/format.h>
 
 namespace lapwing::report {
+
+namespace {
+// Section ids carry member names as typed ("east diagonal L3-U4"); file
+// names keep letters, digits, '.', '-' and '_' and turn the rest into '_',
+// so they need no quoting in a shell.
+std::string file_safe(std::string name) {
+    for (char& ch : name)
+        if (!(std::isalnum(static_cast<unsigned char>(ch)) || ch == '.' || ch == '-' || ch == '_'))
+            ch = '_';
+    return name;
+}
+} // namespace
 
 int figure_case(const check::CheckOutcome& outcome) {
     const auto& cases = outcome.results.cases;
@@ -91,7 +104,8 @@ std::vector<Figure> all_figures(const check::CheckOutcome& outcome) {
                            bolt_forces_svg(outcome, k)});
     for (size_t s = 0; s < outcome.sections.size(); ++s)
         figures.push_back(
-            {"section-" + outcome.sections[s].id + ".svg", "Section " + outcome.sections[s].id,
+            {"section-" + file_safe(outcome.sections[s].id) + ".svg",
+             "Section " + outcome.sections[s].id,
              fmt::format("Normal, shear and von Mises stress along {}, load case {}, against "
                          "the distance from its start.",
                          outcome.sections[s].label, case_name),
