@@ -250,6 +250,8 @@ RegionBoundary build_region_boundary(const PlateRegion& region) {
         boundary.loops.push_back(std::move(out));
     }
     if (!problems.empty()) throw InputError(problems);
+    detail::check_corner_finishes(boundary, tol * 100, problems);
+    if (!problems.empty()) throw InputError(problems);
 
     detail::add_holes(region, tol, boundary, problems);
     if (!problems.empty()) throw InputError(problems);

@@ -138,6 +138,31 @@ TEST_CASE("chamfers and fillets: negative, both, too big for their edges") {
     CHECK(contains(first_problem(r).message, "needs 240 along outline.edge[1]"));
 }
 
+// Cut-outs are removed before the corners are finished, so one reaching into
+// a chamfer or fillet would leave crossing boundary curves (random plates 1597,
+// 2162, 2187 of tests/mesh did, and the mesher could not recover them).
+TEST_CASE("a cut-out reaching into a chamfer or fillet is rejected; one clear of it passes") {
+    PlateRegion r = rectangle();
+    r.outline[2].chamfer = 40; // chamfer from (300, 160) to (260, 200)
+    // An opening whose corner (285, 185) lies beyond the chamfer line x + y = 460.
+    r.cutouts = {{{{240, 150}, {285, 150}, {285, 185}, {240, 185}}}};
+    auto d = first_problem(r);
+    CHECK(d.key_path == "cutouts[0]");
+    CHECK(contains(d.message, "reaches the chamfer at outline[2]"));
+    r.cutouts = {{{{240, 150}, {270, 150}, {270, 180}, {240, 180}}}}; // 270 + 180 < 460
+    CHECK_NOTHROW(geometry::validate(r));
+    r = rectangle();
+    r.outline[2].fillet_radius = 40; // centre (260, 160), arc in x, y > 260, 160
+    // Corner (290, 190) is 42.4 from the centre: outside the arc, in the
+    // rounded-off corner.
+    r.cutouts = {{{{250, 150}, {290, 150}, {290, 190}, {250, 190}}}};
+    d = first_problem(r);
+    CHECK(d.key_path == "cutouts[0]");
+    CHECK(contains(d.message, "reaches the fillet at outline[2]"));
+    r.cutouts = {{{{250, 150}, {285, 150}, {285, 185}, {250, 185}}}}; // 35.4 < 40
+    CHECK_NOTHROW(geometry::validate(r));
+}
+
 TEST_CASE("every problem is reported, not only the first") {
     PlateRegion r = rectangle();
     r.holes = {Hole::circle({400, 100}, 22), Hole::circle({100, 100}, -1)};
