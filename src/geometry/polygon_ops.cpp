@@ -190,8 +190,13 @@ std::vector<TaggedLoop> subtract_polygon(const std::vector<TaggedLoop>& region,
     }
 
     // Chain the directed pieces into closed loops. At a vertex with several
-    // outgoing pieces (loops touching at a point) take the sharpest right
-    // turn, which keeps every loop simple.
+    // outgoing pieces (the boundary touching itself at a point: a cut-out
+    // whose corner touches the outline, or one that pinches the plate) take
+    // the sharpest left turn: it stays in the wedge of region the incoming
+    // piece bounds, so each loop bounds one connected piece (a cut-out
+    // touching the outline from inside opens the outer loop, which then
+    // visits the point twice) and a plate pinched into two pieces at a point
+    // gives two outer loops.
     std::vector<bool> used(kept.size(), false);
     std::vector<TaggedLoop> loops;
     for (size_t first = 0; first < kept.size(); ++first) {
@@ -207,12 +212,12 @@ std::vector<TaggedLoop> subtract_polygon(const std::vector<TaggedLoop>& region,
             const Point in_dir = (kept[cur].b - kept[cur].a).normalized();
             if ((end - kept[first].a).norm() <= tol) break;
             long best = -1;
-            double best_turn = 10.0;
+            double best_turn = -10.0;
             for (size_t k = 0; k < kept.size(); ++k) {
                 if (used[k] || (kept[k].a - end).norm() > tol) continue;
                 const Point out_dir = (kept[k].b - kept[k].a).normalized();
                 const double turn = std::atan2(cross(in_dir, out_dir), in_dir.dot(out_dir));
-                if (turn < best_turn) {
+                if (turn > best_turn) {
                     best_turn = turn;
                     best = static_cast<long>(k);
                 }

@@ -88,10 +88,13 @@ TriangleMesh triangulate(const geometry::RegionBoundary& boundary, const SizeFie
     Triangulation& tri = out.tri;
     const double extent = (hi - lo).norm();
 
-    // --- boundary points, loop by loop; every curve end is a vertex
+    // --- boundary points, loop by loop; every curve end is a vertex. A loop
+    // may pass a point twice, or two loops share one (a cut-out touching the
+    // outline at a corner): the point is one vertex.
     std::vector<Segment>& segs = tri.segments();
+    const double same_point = 1e-9 * std::max(extent, 1.0);
     for (const auto& loop : boundary.loops) {
-        const int first_vertex = static_cast<int>(tri.points().size());
+        const size_t first_segment = segs.size();
         for (size_t k = 0; k < loop.curves.size(); ++k) {
             const Curve& c = loop.curves[k];
             const int curve_id = static_cast<int>(out.curves.size());
@@ -102,14 +105,17 @@ TriangleMesh triangulate(const geometry::RegionBoundary& boundary, const SizeFie
                     std::lround(around / 2.0 * std::abs(c.sweep) / (2 * std::numbers::pi)));
             const std::vector<double> ts = spacing(c, size, fixed);
             for (size_t i = 0; i + 1 < ts.size(); ++i) {
-                const int v = tri.insert(c.point_at(ts[i]));
+                const Point p = c.point_at(ts[i]);
+                int v = tri.vertex_at(p, same_point);
+                if (v < 0) v = tri.insert(p);
                 if (v < 0)
                     throw AnalysisError("mesher: could not insert a boundary point of " +
                                         c.tag.name());
-                segs.push_back({v, v + 1, curve_id, ts[i], ts[i + 1], -1});
+                if (segs.size() > first_segment) segs.back().b = v;
+                segs.push_back({v, -1, curve_id, ts[i], ts[i + 1], -1});
             }
         }
-        segs.back().b = first_vertex; // close the loop
+        segs.back().b = segs[first_segment].a; // close the loop
     }
 
     // --- conforming: split segments missing from the triangulation

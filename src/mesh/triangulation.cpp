@@ -249,6 +249,14 @@ int Triangulation::insert_constrained(const Point& p, int seed, int split_segmen
     return fill_cavity(p, split_segment, tm);
 }
 
+int Triangulation::vertex_at(const Point& p, double tol) const {
+    const int t = locate(p, last_, nullptr);
+    if (t < 0) return -1;
+    for (int v : tris_[t].v)
+        if (v >= 3 && (points_[v] - p).norm() <= tol) return v;
+    return -1;
+}
+
 bool Triangulation::has_edge(int a, int b) const {
     const int t0 = vert_tri_[a];
     for (int dir = 0; dir < 2; ++dir) {

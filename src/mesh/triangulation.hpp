@@ -42,6 +42,10 @@ public:
     // vertex id.
     int insert(const Point& p);
 
+    // An existing vertex within `tol` of p, or -1 (before segments are
+    // constrained).
+    int vertex_at(const Point& p, double tol) const;
+
     // True if a and b are joined by an edge.
     bool has_edge(int a, int b) const;
 

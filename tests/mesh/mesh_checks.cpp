@@ -85,26 +85,53 @@ std::string conformity_problem(const mesh::Mesh& m, int n_loops) {
             << " elements and listed " << n_listed << " times as boundary";
         return why.str();
     }
-    // Boundary loops: each boundary node starts exactly one boundary edge.
-    std::map<int, int> next;
-    for (const mesh::BoundaryEdge& be : m.boundary_edges) {
-        const int a = be.nodes[0], b = be.nodes[fe::edge_node_count(m.kind) - 1];
-        if (next.count(a)) return "two boundary edges start at one node";
-        next[a] = b;
+    // Boundary loops: each boundary node starts as many boundary edges as end
+    // there (one, or more where the boundary touches itself, as a cut-out
+    // touching the outline at a point). The walk takes, at such a node, the
+    // sharpest left turn, which stays in the wedge of region the incoming edge
+    // bounds (as geometry's loops do), so a loop bounds one connected piece.
+    const int last = fe::edge_node_count(m.kind) - 1;
+    std::multimap<int, size_t> starting;
+    std::map<int, int> balance;
+    for (size_t i = 0; i < m.boundary_edges.size(); ++i) {
+        const auto& be = m.boundary_edges[i];
+        starting.emplace(be.nodes[0], i);
+        ++balance[be.nodes[0]];
+        --balance[be.nodes[last]];
     }
+    for (const auto& [node, count] : balance)
+        if (count != 0) return "a boundary loop is open";
+    // Direction leaving an edge's start and arriving at its end (through the
+    // mid-side node of a quadratic edge).
+    const auto leaving = [&](const mesh::BoundaryEdge& be) {
+        return Eigen::Vector2d(m.nodes[be.nodes[1]] - m.nodes[be.nodes[0]]);
+    };
+    const auto arriving = [&](const mesh::BoundaryEdge& be) {
+        return Eigen::Vector2d(m.nodes[be.nodes[last]] - m.nodes[be.nodes[last - 1]]);
+    };
     int loops = 0;
-    std::map<int, bool> done;
-    for (const auto& [start, unused] : next) {
-        if (done[start]) continue;
+    std::vector<bool> walked(m.boundary_edges.size(), false);
+    for (size_t first = 0; first < m.boundary_edges.size(); ++first) {
+        if (walked[first]) continue;
         ++loops;
-        int v = start;
-        for (size_t guard = 0; guard <= next.size(); ++guard) {
-            done[v] = true;
-            if (!next.count(v)) return "a boundary loop is open";
-            v = next[v];
+        const int start = m.boundary_edges[first].nodes[0];
+        size_t cur = first;
+        for (size_t guard = 0; guard <= m.boundary_edges.size(); ++guard) {
+            walked[cur] = true;
+            const int v = m.boundary_edges[cur].nodes[last];
             if (v == start) break;
+            const Eigen::Vector2d in = arriving(m.boundary_edges[cur]);
+            long best = -1;
+            double best_turn = -10.0;
+            for (auto [it, end] = starting.equal_range(v); it != end; ++it) {
+                if (walked[it->second]) continue;
+                const Eigen::Vector2d out = leaving(m.boundary_edges[it->second]);
+                const double turn = std::atan2(in.x() * out.y() - in.y() * out.x(), in.dot(out));
+                if (turn > best_turn) best_turn = turn, best = static_cast<long>(it->second);
+            }
+            if (best < 0) return "a boundary loop does not close";
+            cur = static_cast<size_t>(best);
         }
-        if (v != start) return "a boundary loop does not close";
     }
     if (loops != n_loops) {
         why << loops << " boundary loops, expected " << n_loops;
