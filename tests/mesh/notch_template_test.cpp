@@ -6,10 +6,12 @@
 #include "input/load_connection.hpp"
 #include "mesh/mesh.hpp"
 #include "mesh_checks.hpp"
+#include "support/approx.hpp"
 
 #include <cmath>
 #include <doctest/doctest.h>
 #include <numbers>
+#include <string>
 
 using namespace lapwing;
 
@@ -75,7 +77,7 @@ TEST_CASE("a template with a notch across a plate corner validates, meshes and a
     const double hole_d = c.bolt_groups[0].hole.width;
     const double exact = 300.0 * 120.0 - 40.0 * 30.0 - 0.5 * 10.0 * 10.0 -
                          4 * std::numbers::pi * hole_d * hole_d / 4;
-    CHECK(test::mesh_area(m) == doctest::Approx(exact).epsilon(1e-5));
+    CHECK(test::mesh_area(m) == test::approx(exact, 1e-5));
     // One outer loop and four hole loops; the notch opens the outer loop.
     CHECK(test::conformity_problem(m, 5) == "");
     // The cope's two edges inside the plate carry its tag and lie on x = 260
@@ -96,4 +98,38 @@ TEST_CASE("a template with a notch across a plate corner validates, meshes and a
     REQUIRE(r.cases.size() == 1);
     CHECK(r.cases[0].equilibrium_residual <= 1e-9);
     CHECK(r.cases[0].solver_residual <= 1e-9);
+}
+
+// The same plate with cut-outs that touch the outline (a cope drawn flush on
+// the corner, sharing two edges with the outline; a V-notch whose tip touches
+// the top edge at one point) or cross it: the template validates and meshes,
+// and the area matches the hand calculation within 1e-5.
+TEST_CASE("templates with cut-outs touching or crossing the outline validate and mesh") {
+    struct Case {
+        const char* what;
+        const char* points;
+        double removed; // cut-out area on the plate, by hand
+    };
+    const Case cases[] = {
+        {"flush cope", "[[260, 90], [300, 90], [300, 120], [260, 120]]", 40.0 * 30.0},
+        {"notch touching at a point", "[[100, 120], [115, 100], [85, 100]]", 0.5 * 30.0 * 20.0},
+        {"notch crossing the top edge", "[[90, 100], [110, 100], [110, 130], [90, 130]]",
+         20.0 * 20.0},
+    };
+    for (const Case& k : cases) {
+        CAPTURE(k.what);
+        std::string text = notched_plate;
+        const std::string old = "[[260, 90], [320, 90], [320, 140], [260, 140]]";
+        text.replace(text.find(old), old.size(), k.points);
+        const model::Connection c = input::load_connection(text, "touch.toml");
+        const analysis::PlateLayout layout = analysis::plate_layout(c);
+        const mesh::Mesh m = mesh::build_mesh(layout.region, analysis::mesh_settings(c));
+        const double hole_d = c.bolt_groups[0].hole.width;
+        const double exact = 300.0 * 120.0 - k.removed - 0.5 * 10.0 * 10.0 -
+                             4 * std::numbers::pi * hole_d * hole_d / 4;
+        CHECK(test::mesh_area(m) == test::approx(exact, 1e-5));
+        CHECK(test::conformity_problem(m, 5) == "");
+        CHECK(m.quality_summary.n_inverted == 0);
+        CHECK(m.quality_summary.scaled_jacobian.min >= 0.3);
+    }
 }
