@@ -35,15 +35,23 @@ double combine(double ratio, double sine) {
 struct Corners {
     double ratio, sine;
 };
+// Each edge vector and its length once (corner k joins edges k and k − 1,
+// the latter reversed: the same numbers, bit for bit, as from the corners).
 Corners corners(const std::vector<Eigen::Vector2d>& x, const int* q) {
+    std::array<Eigen::Vector2d, 4> edge;
+    std::array<double, 4> length;
+    for (int k = 0; k < 4; ++k) {
+        edge[k] = x[q[(k + 1) % 4]] - x[q[k]];
+        length[k] = edge[k].norm();
+    }
     double lo = HUGE_VAL, hi = -HUGE_VAL, sine = 1.0;
     for (int k = 0; k < 4; ++k) {
-        const Eigen::Vector2d& p = x[q[k]];
-        const Eigen::Vector2d a = x[q[(k + 1) % 4]] - p, b = x[q[(k + 3) % 4]] - p;
+        const Eigen::Vector2d& a = edge[k];
+        const Eigen::Vector2d b = -edge[(k + 3) % 4];
         const double cr = a.x() * b.y() - a.y() * b.x();
         lo = std::min(lo, cr);
         hi = std::max(hi, cr);
-        sine = std::min(sine, cr / (a.norm() * b.norm()));
+        sine = std::min(sine, cr / (length[k] * length[(k + 3) % 4]));
     }
     return {hi > 0 ? lo / hi : -1.0, sine};
 }
@@ -132,10 +140,13 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
             if (count == 0) continue;
             const Eigen::Vector2d old = nodes[v];
             nodes[v] = sum / count;
-            double after = 1.0;
-            for (int i = start[v]; i < start[v + 1]; ++i)
-                after = std::min(after, quad_metric(nodes, &quads[4 * list[i]]));
-            if (after < before) nodes[v] = old;
+            // Undo the move as soon as one element gets worse than the worst before.
+            for (int i = start[v]; i < start[v + 1]; ++i) {
+                if (quad_metric(nodes, &quads[4 * list[i]]) < before) {
+                    nodes[v] = old;
+                    break;
+                }
+            }
         }
     }
 
@@ -144,9 +155,11 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
     // Each node is searched at most once per round, and the search stops once
     // every adjacent element clears the selection mark.
     constexpr double good = 1.2;
-    const auto worst_at = [&](int v) {
+    // Worst metric of the elements at v; stops at the first one at or below
+    // `floor` (a trial position that cannot beat the best so far).
+    const auto worst_at = [&](int v, double floor) {
         double w = HUGE_VAL;
-        for (int i = start[v]; i < start[v + 1]; ++i)
+        for (int i = start[v]; i < start[v + 1] && w > floor; ++i)
             w = std::min(w, quad_metric(nodes, &quads[4 * list[i]]));
         return w;
     };
@@ -163,7 +176,7 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
                 const int v = quads[4 * q + k];
                 if (fixed[v] || searched[v] == round) continue;
                 searched[v] = round;
-                double best = worst_at(v);
+                double best = worst_at(v, -HUGE_VAL);
                 double step = 0.0;
                 for (int i = start[v]; i < start[v + 1]; ++i) {
                     const int* qq = &quads[4 * list[i]];
@@ -176,7 +189,7 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
                     Eigen::Vector2d best_pos = base;
                     for (const Eigen::Vector2d& d : compass) {
                         nodes[v] = base + step * d;
-                        const double w = worst_at(v);
+                        const double w = worst_at(v, best);
                         if (w > best) {
                             best = w;
                             best_pos = nodes[v];
