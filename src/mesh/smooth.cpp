@@ -156,11 +156,18 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
     // every adjacent element clears the selection mark.
     constexpr double good = 1.2;
     // Worst metric of the elements at v; stops at the first one at or below
-    // `floor` (a trial position that cannot beat the best so far).
-    const auto worst_at = [&](int v, double floor) {
+    // `floor` (a trial position that cannot beat the best so far). The
+    // element that ruled out the last trial (`lead`, an offset in v's list)
+    // is judged first, as it most likely rules out the next one too; the
+    // minimum, when reached, does not depend on the order.
+    const auto worst_at = [&](int v, double floor, int& lead) {
+        const int n = start[v + 1] - start[v];
         double w = HUGE_VAL;
-        for (int i = start[v]; i < start[v + 1] && w > floor; ++i)
-            w = std::min(w, quad_metric(nodes, &quads[4 * list[i]]));
+        for (int j = 0; j < n && w > floor; ++j) {
+            const int i = (lead + j) % n;
+            w = std::min(w, quad_metric(nodes, &quads[4 * list[start[v] + i]]));
+            if (w <= floor) lead = i;
+        }
         return w;
     };
     constexpr double s45 = 0.7071067811865476; // the eight compass directions
@@ -176,7 +183,8 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
                 const int v = quads[4 * q + k];
                 if (fixed[v] || searched[v] == round) continue;
                 searched[v] = round;
-                double best = worst_at(v, -HUGE_VAL);
+                int lead = 0;
+                double best = worst_at(v, -HUGE_VAL, lead);
                 double step = 0.0;
                 for (int i = start[v]; i < start[v + 1]; ++i) {
                     const int* qq = &quads[4 * list[i]];
@@ -189,7 +197,7 @@ void smooth(std::vector<Eigen::Vector2d>& nodes, const std::vector<int>& quads,
                     Eigen::Vector2d best_pos = base;
                     for (const Eigen::Vector2d& d : compass) {
                         nodes[v] = base + step * d;
-                        const double w = worst_at(v, best);
+                        const double w = worst_at(v, best, lead);
                         if (w > best) {
                             best = w;
                             best_pos = nodes[v];

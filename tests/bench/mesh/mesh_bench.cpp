@@ -1,7 +1,8 @@
 // Mesher benchmark: quadrilaterals per second on plates of about 10³ to 10⁶
 // elements, and peak resident memory (getrusage). Run a few times and quote
-// medians: `build/bench/tests/bench/mesh/mesh_bench [repeats] [small]`
-// (size 0.00 in the table is the small plate at its default element size).
+// medians: `build/bench/tests/bench/mesh/mesh_bench [repeats] [small [Q4|Q8]]`
+// (size 0.00 in the table is the small plate at its default element size;
+// "small" runs only it, for profiling, and a kind after it only that kind).
 #include "mesh/mesh.hpp"
 
 #include <algorithm>
@@ -52,9 +53,11 @@ int main(int argc, char** argv) {
                 "quads_per_s", "peak_rss_MB");
     // Only the small plate with a second argument "small" (for profiling).
     const bool only_small = argc > 2 && std::string_view(argv[2]) == "small";
+    const std::string_view only_kind = only_small && argc > 3 ? argv[3] : "";
     for (double size : {0.0, 40.0, 12.0, 4.0, 1.2, 0.55}) {
         if (only_small && size > 0) break;
         for (auto kind : {fe::ElementKind::Q4, fe::ElementKind::Q8}) {
+            if (!only_kind.empty() && fe::name(kind) != only_kind) continue;
             mesh::MeshSettings s;
             s.kind = kind;
             s.element_size = size; // 0: the small plate at its default size
