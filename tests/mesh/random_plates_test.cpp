@@ -78,7 +78,8 @@ std::string random_plate_problem(int seed, Tally* tally) {
         why << "threw: " << e.what();
     }
     std::string out = why.str();
-    if (!out.empty()) out = "seed " + std::to_string(seed) + " (" + std::string(fe::name(s.kind)) + "): " + out;
+    if (!out.empty())
+        out = "seed " + std::to_string(seed) + " (" + std::string(fe::name(s.kind)) + "): " + out;
     return out;
 }
 
