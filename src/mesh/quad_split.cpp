@@ -232,8 +232,9 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
     smooth(mesh.nodes, quads, fixed, curved_mid, smoothing_passes);
 
     // Quadratic nodes: one per quadrilateral edge, shared by the two elements
-    // that meet there. Quadrilateral edges are numbered by their lower corner
-    // pair through a sort, which is deterministic.
+    // that meet there. Quadrilateral edges are numbered in the order of their
+    // (lower, higher corner, quadrilateral), which is deterministic: bucketed
+    // by the lower corner, then each small bucket sorted.
     const int n_quads = static_cast<int>(quads.size() / 4);
     const int npe = fe::node_count(kind);
     mesh.connectivity.assign(static_cast<size_t>(n_quads) * npe, -1);
@@ -244,17 +245,27 @@ Mesh split_into_quads(const TriangleMesh& tm, fe::ElementKind kind, int smoothin
         struct EdgeRef {
             int lo, hi, quad, local;
         };
-        std::vector<EdgeRef> edges;
-        edges.reserve(4 * static_cast<size_t>(n_quads));
-        for (int q = 0; q < n_quads; ++q) {
-            for (int e = 0; e < 4; ++e) {
-                const int a = quads[4 * q + e], b = quads[4 * q + (e + 1) % 4];
-                edges.push_back({std::min(a, b), std::max(a, b), q, e});
+        const size_t n_corners = mesh.nodes.size();
+        std::vector<int> bucket(n_corners + 1, 0);
+        for (int q = 0; q < n_quads; ++q)
+            for (int e = 0; e < 4; ++e)
+                ++bucket[std::min(quads[4 * q + e], quads[4 * q + (e + 1) % 4]) + 1];
+        for (size_t v = 0; v < n_corners; ++v) bucket[v + 1] += bucket[v];
+        std::vector<EdgeRef> edges(4 * static_cast<size_t>(n_quads));
+        {
+            std::vector<int> fill(bucket.begin(), bucket.end() - 1);
+            for (int q = 0; q < n_quads; ++q) {
+                for (int e = 0; e < 4; ++e) {
+                    const int a = quads[4 * q + e], b = quads[4 * q + (e + 1) % 4];
+                    edges[fill[std::min(a, b)]++] = {std::min(a, b), std::max(a, b), q, e};
+                }
             }
         }
-        std::sort(edges.begin(), edges.end(), [](const EdgeRef& x, const EdgeRef& y) {
-            return x.lo != y.lo ? x.lo < y.lo : x.hi != y.hi ? x.hi < y.hi : x.quad < y.quad;
-        });
+        for (size_t v = 0; v < n_corners; ++v)
+            std::sort(edges.begin() + bucket[v], edges.begin() + bucket[v + 1],
+                      [](const EdgeRef& x, const EdgeRef& y) {
+                          return x.hi != y.hi ? x.hi < y.hi : x.quad < y.quad;
+                      });
         // Boundary halves put their mid-side node on the curve.
         std::vector<int> curve_of(static_cast<size_t>(n_quads) * 4, -1);
         std::vector<double> t_mid(static_cast<size_t>(n_quads) * 4, 0.0);
