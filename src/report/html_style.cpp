@@ -67,6 +67,11 @@ h4 { font-size: 13px; margin: 0 0 4px; }
 .bar.fail i { background: var(--fail); }
 .bar b { position: absolute; left: 83.3%; top: -2px; bottom: -2px; border-left: 1.5px solid var(--ink); }
 tr.governing td { background: #fff4cc; font-weight: 600; }
+/* Ten columns must fit a portrait A4 or Letter page: long ids wrap anywhere
+   and the worked formulas are small, so the status stays on the paper. */
+table.checks th:first-child { width: 17%; }
+table.checks td:first-child { overflow-wrap: anywhere; }
+table.checks td .muted { font-size: 10.5px; }
 .status-pass { color: var(--pass); font-weight: 600; }
 .status-fail { color: var(--fail); font-weight: 700; }
 .status-info { color: var(--info); }
@@ -78,6 +83,9 @@ pre { background: var(--band); padding: 8px; font-size: 11px; white-space: pre-w
   section.sheet:first-of-type { break-before: auto; }
   h2 { margin-top: 0; }
   .figure-group.per-case { break-inside: avoid; page-break-inside: avoid; }
+  table.checks { font-size: 7.5pt; }
+  table.checks td .muted { font-size: 6.5pt; }
+  table.checks .bar { width: 48px; }
   tr, .title-block { break-inside: avoid; page-break-inside: avoid; }
   thead { display: table-header-group; }
   * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
