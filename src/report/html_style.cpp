@@ -62,6 +62,9 @@ h4 { font-size: 13px; margin: 0 0 4px; }
 .figure-group.per-case { display: grid; grid-template-columns: 1fr 1fr; column-gap: 16px; }
 .figure-group.per-case > h3 { grid-column: 1 / -1; }
 .figure-group.per-case figure { margin: 6px 0 12px; }
+/* The contour spans the page so that its legend stays legible; the deformed
+   shape and the bolt forces share the row below. */
+.figure-group.per-case figure:first-of-type { grid-column: 1 / -1; }
 .bar { position: relative; width: 120px; height: 11px; background: var(--band); border: 1px solid var(--rule); }
 .bar i { position: absolute; left: 0; top: 0; bottom: 0; background: var(--pass); }
 .bar.fail i { background: var(--fail); }
