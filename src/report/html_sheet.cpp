@@ -67,10 +67,12 @@ std::string cautions(const check::CheckOutcome& o, const RunInfo& run) {
     return h;
 }
 
-std::string figure_html(const Figure& f, const char* heading) {
-    return fmt::format("<figure id=\"fig-{0}\"><{1}>{2}</{1}>\n{3}<figcaption>{4} (also {0})"
+// "(also FILE)" only when the .svg files are written beside the sheet.
+std::string figure_html(const Figure& f, const char* heading, bool files_written) {
+    return fmt::format("<figure id=\"fig-{0}\"><{1}>{2}</{1}>\n{3}<figcaption>{4}{5}"
                        "</figcaption></figure>\n",
-                       escape(f.file), heading, escape(f.title), f.svg, escape(f.caption));
+                       escape(f.file), heading, escape(f.title), f.svg, escape(f.caption),
+                       files_written ? " (also " + escape(f.file) + ")" : std::string());
 }
 
 // Figures grouped as a reviewer reads them: the model (geometry, mesh),
@@ -117,7 +119,7 @@ std::string figures_html(const check::CheckOutcome& o, const std::vector<Figure>
         const Group& g = groups[i];
         h += fmt::format("<div class=\"figure-group{}\" id=\"figures-{}\"><h3>{}</h3>\n",
                          g.per_case ? " per-case" : "", i, escape(g.heading));
-        for (const Figure* f : g.members) h += figure_html(*f, "h4");
+        for (const Figure* f : g.members) h += figure_html(*f, "h4", o.connection.report.figures);
         h += "</div>\n";
     }
     return h;
