@@ -8,6 +8,7 @@
 #include "check/buckling_lengths.hpp"
 #include "check/evaluation.hpp"
 #include "check/limit_states.hpp"
+#include "check/unit_text.hpp"
 #include "geometry/region_boundary.hpp"
 
 #include <cmath>
@@ -33,10 +34,10 @@ double member_axial(const model::Member& m, const std::map<std::string, double>&
     return axial;
 }
 
-std::string other_form(const Capacity& other) {
+std::string other_form(const Capacity& other, UnitSystem units) {
     if (other.method.empty()) return "";
-    return fmt::format("for information, {}: {:.4g} N ({})", other.method, other.value,
-                       other.formula);
+    return fmt::format("for information, {}: {} ({})", other.method,
+                       value_text(other.value, Quantity::force, units), other.formula);
 }
 
 CheckRow classical_row(std::string id, Family family, std::string what, std::string where,
@@ -81,13 +82,15 @@ void bearing_rows(const model::Connection& c, const Evaluation& e,
             const TwoForms forms = bearing_forms(gap, t, c.material, 0.0, c.allowables.bearing);
             CheckRow row = classical_row(
                 fmt::format("bearing:{}[{}]:{}", g.name, bm.bolt, r.name), Family::bearing,
-                fmt::format("bolt bearing and tear-out (bearing stress F/(d t) = {:.4g} MPa)",
-                            bearing_stress(b.magnitude, g.diameter, t)),
-                fmt::format("bolt {}[{}] at ({:.1f}, {:.1f}) mm; lc = {:.1f} mm to {}", g.name,
-                            bm.bolt, bm.centre.x(), bm.centre.y(), gap.lc, gap.ahead),
+                fmt::format("bolt bearing and tear-out (bearing stress F/(d t) = {})",
+                            value_text(bearing_stress(b.magnitude, g.diameter, t), Quantity::stress,
+                                       c.units)),
+                fmt::format("bolt {}[{}] at {}; lc = {} to {}", g.name, bm.bolt,
+                            point_text(bm.centre, c.units), length_text(gap.lc, c.units),
+                            gap.ahead),
                 r.name, forms.chosen, b.magnitude);
             row.capacity_required = true;
-            row.note = other_form(forms.other);
+            row.note = other_form(forms.other, c.units);
             rows.push_back(std::move(row));
         }
     }
@@ -122,7 +125,7 @@ void block_shear_rows(const model::Connection& c, const Evaluation& e,
                 fmt::format("bolt group {} of member {}", g.name, member.name), r.name,
                 pc.capacity.chosen, pc.demand);
             row.capacity_required = true;
-            row.note = other_form(pc.capacity.other);
+            row.note = other_form(pc.capacity.other, c.units);
             rows.push_back(std::move(row));
         }
     }
@@ -141,8 +144,9 @@ void whitmore_rows(const model::Connection& c, const Evaluation& e,
             supported.empty()
                 ? BucklingLengths{}
                 : thornton_lengths(boundary, line.from, line.to, member_axis(member), supported);
-        std::string where = fmt::format("{}, Lw = {:.1f} mm ({:.1f} mm before clipping and holes)",
-                                        line.label, Lw, line.unclipped_length);
+        std::string where =
+            fmt::format("{}, Lw = {} ({} before clipping and holes)", line.label,
+                        length_text(Lw, c.units), length_text(line.unclipped_length, c.units));
         for (size_t k = 0; k < e.results.cases.size(); ++k) {
             const std::string& lc = e.results.cases[k].name;
             const double axial = member_axial(member, case_factors(c, k));
@@ -164,7 +168,7 @@ void whitmore_rows(const model::Connection& c, const Evaluation& e,
                 continue;
             }
             const Slenderness s = thornton_slenderness(
-                lengths.lengths(), t, c.allowables.whitmore_buckling.K, c.material.E);
+                lengths.lengths(), t, c.allowables.whitmore_buckling.K, c.material.E, c.units);
             const TwoForms forms =
                 buckling_forms(s, c.material, Lw, t, c.allowables.whitmore_buckling,
                                c.allowables.block_shear.style);
@@ -174,7 +178,7 @@ void whitmore_rows(const model::Connection& c, const Evaluation& e,
                             s.K, s.KL_over_r),
                 where + "; " + s.lengths, lc, forms.chosen, -axial);
             row.capacity_required = true;
-            row.note = other_form(forms.other);
+            row.note = other_form(forms.other, c.units);
             for (const std::string& n : lengths.notes) row.note += "; " + n;
             rows.push_back(std::move(row));
         }
@@ -192,7 +196,8 @@ void net_section_rows(const model::Connection& c, const Evaluation& e,
         // holes not deducted); net: the material left between the holes.
         const double gross = line.length(), net = line.material_length();
         const std::string where =
-            fmt::format("{}, gross {:.1f} mm, net {:.1f} mm", line.label, gross, net);
+            fmt::format("{}, gross {}, net {}", line.label, length_text(gross, c.units),
+                        length_text(net, c.units));
         for (size_t k = 0; k < e.results.cases.size(); ++k) {
             const SectionStress& ss = e.section_stress[k][s];
             const std::string& lc = e.results.cases[k].name;

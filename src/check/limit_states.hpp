@@ -128,8 +128,10 @@ struct Slenderness {
     std::string lengths;  // "L = (L1 + L2 + L3)/3 = (…)/3 = … mm"
 };
 // `lengths` holds the one to three lengths that reach the support (mm);
-// none throws lapwing::AnalysisError.
-Slenderness thornton_slenderness(const std::vector<double>& lengths, double t, double K, double E);
+// none throws lapwing::AnalysisError. `units` is the system the `lengths`
+// text is written in (the values stay in mm and MPa).
+Slenderness thornton_slenderness(const std::vector<double>& lengths, double t, double K, double E,
+                                 UnitSystem units = UnitSystem::n_mm);
 
 // AISC 360-16 §E3 column curve on the Whitmore area Lw·t:
 // Fcr = 0.658^(Fy/Fe) Fy when KL/r ≤ 4.71 √(E/Fy), else 0.877 Fe; φ Fcr Lw t.

@@ -1,6 +1,7 @@
 // Peak von Mises and principal stresses with their locations.
 #include "check/peaks.hpp"
 
+#include "check/unit_text.hpp"
 #include "fe/stress.hpp"
 
 #include <cmath>
@@ -73,7 +74,7 @@ std::string describe_location(const analysis::PlateLayout& layout, const model::
             }
         }
     }
-    const std::string point = fmt::format("({:.1f}, {:.1f}) mm", at.x(), at.y());
+    const std::string point = point_text(at, c.units);
     // Within a millimetre or two counts as "at" the feature; else name the point only.
     const double near = std::max(2.0, 0.5 * c.mesh.size);
     return best <= near ? fmt::format("{}, {}", words, point) : point;

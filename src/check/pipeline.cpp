@@ -24,6 +24,20 @@ double Convergence::largest_change() const {
     return largest;
 }
 
+const char* words(Stage stage) {
+    switch (stage) {
+    case Stage::model:
+        return "meshing and solving the load cases";
+    case Stage::checks:
+        return "checking";
+    case Stage::convergence:
+        return "convergence mesh: meshing, solving and measuring";
+    case Stage::comparison:
+        return "convergence mesh: comparing with the model's mesh";
+    }
+    return "working";
+}
+
 namespace {
 
 // The values compared between the two meshes: every peak, weld and section
@@ -41,8 +55,8 @@ void compare(const Evaluation& coarse, const Evaluation& fine, Convergence& out)
             const std::string& id = coarse.sections[s].id;
             out.rows.push_back(
                 {fmt::format("normal force N, {}", id), lc, Quantity::force, a.N, b.N});
-            out.rows.push_back({fmt::format("shear force V, {}", id), lc, Quantity::force, a.V,
-                                b.V});
+            out.rows.push_back(
+                {fmt::format("shear force V, {}", id), lc, Quantity::force, a.V, b.V});
             out.rows.push_back({fmt::format("membrane stress, {}", id), lc, Quantity::stress,
                                 a.max_membrane, b.max_membrane});
             out.rows.push_back({fmt::format("membrane + bending, {}", id), lc, Quantity::stress,
@@ -72,7 +86,12 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     CheckOutcome out;
     out.connection = c;
     const auto start = std::chrono::steady_clock::now();
+    const auto stage = [&](Stage s) {
+        if (options.on_stage) options.on_stage(s);
+    };
+    stage(Stage::model);
     Evaluation e = evaluate(c, analysis::mesh_settings(c), options.cache);
+    stage(Stage::checks);
     std::vector<CheckRow> rows = stress_rows(c, e);
     std::vector<CheckRow> classical = classical_rows(c, e);
     rows.insert(rows.end(), std::make_move_iterator(classical.begin()),
@@ -88,7 +107,9 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
         mesh::MeshSettings fine_settings = e.settings;
         fine_settings.element_size = 0.5 * e.element_size;
         fine_settings.elements_around_hole = 2 * mesh::detail::elements_around_hole(e.settings);
+        stage(Stage::convergence);
         const Evaluation f = evaluate(c, fine_settings, options.cache);
+        stage(Stage::comparison);
         Convergence& cv = out.convergence;
         cv.done = true;
         cv.coarse_size = e.element_size;

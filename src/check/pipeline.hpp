@@ -12,12 +12,25 @@
 #include "mesh/mesh.hpp"
 #include "model/connection.hpp"
 
+#include <functional>
 #include <string>
 #include <vector>
 
 namespace lapwing::check {
 
 struct ReuseCache; // src/check/reuse_cache.hpp (sweeps)
+
+// The steps of check_connection in the order they run, for a progress
+// display. Meshing and solving share a step because both happen inside one
+// evaluation of the model (src/check/evaluation.cpp).
+enum class Stage {
+    model,       // meshing the plate and solving every load case
+    checks,      // sections, peaks, the classical limit states, the check table
+    convergence, // the finer convergence mesh: meshing, solving, measuring
+    comparison,  // comparing the two meshes
+};
+// Words for a progress line, e.g. "meshing and solving the load cases".
+const char* words(Stage stage);
 
 struct CheckOptions {
     // Also solve on a mesh with half the element size everywhere (twice the
@@ -27,6 +40,10 @@ struct CheckOptions {
     // For sweeps: a per-worker cache that reuses the mesh, the sparse pattern
     // and the fill-reducing ordering when only values change between runs.
     ReuseCache* cache = nullptr;
+    // Called as each stage starts, on the calling thread. The pipeline
+    // itself prints nothing; cli/ turns these into the terminal's progress
+    // line.
+    std::function<void(Stage)> on_stage;
 };
 
 // The highest local stresses of one load case, from the recovered nodal and

@@ -1,6 +1,7 @@
 // Check rows from the stress field: local peaks and weld forces against the
 // user's allowables (section rows join once the section lines exist).
 #include "check/evaluation.hpp"
+#include "check/unit_text.hpp"
 
 #include <fmt/format.h>
 
@@ -10,15 +11,17 @@ namespace {
 
 // "peak_von_mises = 0.9*Fy = 310.5 MPa": the key, what the user typed and
 // its value, so the reviewer sees where the capacity came from.
-std::string allowable_text(const char* key, const model::Allowable& a, const char* unit) {
+std::string allowable_text(const char* key, const model::Allowable& a, Quantity quantity,
+                           UnitSystem units) {
     if (!a.given) return fmt::format("{} not set: shown for information", key);
-    if (a.source.empty()) return fmt::format("{} = {:.4g} {}", key, a.value, unit);
-    return fmt::format("{} = {} = {:.4g} {}", key, a.source, a.value, unit);
+    const std::string value = value_text(a.value, quantity, units);
+    if (a.source.empty()) return fmt::format("{} = {}", key, value);
+    return fmt::format("{} = {} = {}", key, a.source, value);
 }
 
 CheckRow user_row(std::string id, Family family, std::string what, std::string where,
                   const std::string& load_case, const char* key, const model::Allowable& a,
-                  Quantity quantity, double demand) {
+                  Quantity quantity, double demand, UnitSystem units) {
     CheckRow r;
     r.id = std::move(id);
     r.family = family;
@@ -26,7 +29,7 @@ CheckRow user_row(std::string id, Family family, std::string what, std::string w
     r.where = std::move(where);
     r.load_case = load_case;
     r.method = "user allowable";
-    r.formula = allowable_text(key, a, quantity == Quantity::stress ? "MPa" : "N/mm");
+    r.formula = allowable_text(key, a, quantity, units);
     r.quantity = quantity;
     r.demand = demand;
     r.capacity = a.given ? a.value : 0.0;
@@ -43,8 +46,8 @@ std::vector<CheckRow> stress_rows(const model::Connection& c, const Evaluation& 
         const PeakStress& p = e.peaks[k];
         rows.push_back(user_row(fmt::format("peak:{}", lc), Family::peak_stress,
                                 "peak von Mises stress (local, mesh dependent)", p.near, lc,
-                                "peak_von_mises", al.peak_von_mises, Quantity::stress,
-                                p.von_mises));
+                                "peak_von_mises", al.peak_von_mises, Quantity::stress, p.von_mises,
+                                c.units));
         // Sections: linearized stresses against the user's allowables; a
         // family left out of [allowables] gives no rows (the profiles and
         // resultants are still on the calc sheet).
@@ -55,7 +58,8 @@ std::vector<CheckRow> stress_rows(const model::Connection& c, const Evaluation& 
                                  const model::Allowable& a, double demand) {
                 if (!a.given) return;
                 rows.push_back(user_row(fmt::format("{}:{}:{}", id, line.id, lc), Family::section,
-                                        what, line.label, lc, key, a, Quantity::stress, demand));
+                                        what, line.label, lc, key, a, Quantity::stress, demand,
+                                        c.units));
             };
             add("membrane", "membrane stress (linearized, largest over the pieces)",
                 "section_membrane", al.section_membrane, ss.max_membrane);
@@ -70,13 +74,13 @@ std::vector<CheckRow> stress_rows(const model::Connection& c, const Evaluation& 
             rows.push_back(user_row(fmt::format("{}:average:{}", line.id, lc), Family::weld,
                                     "weld force per length, average over the weld", line.label, lc,
                                     "weld_per_length", al.weld_per_length,
-                                    Quantity::force_per_length, f.average));
-            rows.push_back(
-                user_row(fmt::format("{}:peak:{}", line.id, lc), Family::weld,
-                         "weld force per length, highest element-edge average (local)",
-                         fmt::format("{}, {:.0f} mm from its start", line.label, f.peak_s), lc,
-                         "weld_per_length", al.weld_per_length, Quantity::force_per_length,
-                         f.peak_edge_average));
+                                    Quantity::force_per_length, f.average, c.units));
+            rows.push_back(user_row(fmt::format("{}:peak:{}", line.id, lc), Family::weld,
+                                    "weld force per length, highest element-edge average (local)",
+                                    fmt::format("{}, {} from its start", line.label,
+                                                length_text(f.peak_s, c.units, true)),
+                                    lc, "weld_per_length", al.weld_per_length,
+                                    Quantity::force_per_length, f.peak_edge_average, c.units));
         }
     }
     return rows;

@@ -17,7 +17,8 @@ std::string num(double x) {
 }
 } // namespace
 
-Slenderness thornton_slenderness(const std::vector<double>& lengths, double t, double K, double E) {
+Slenderness thornton_slenderness(const std::vector<double>& lengths, double t, double K, double E,
+                                 UnitSystem units) {
     // BucklingLengths::reaching can be empty (no line reaches a support):
     // the caller must not ask for a column then; say so rather than divide by 0.
     if (lengths.empty())
@@ -29,17 +30,23 @@ Slenderness thornton_slenderness(const std::vector<double>& lengths, double t, d
     std::string terms;
     for (size_t i = 0; i < lengths.size(); ++i) {
         sum += lengths[i];
-        terms += (i ? " + " : "") + num(lengths[i]);
+        terms += (i ? " + " : "") + num(from_internal(lengths[i], Quantity::length, units));
     }
     s.L = sum / static_cast<double>(lengths.size());
     s.r = t / std::sqrt(12.0); // I/A = (b t³/12)/(b t) for bending out of the plate's plane
     s.K = K;
     s.KL_over_r = K * s.L / s.r;
     s.Fe = std::numbers::pi * std::numbers::pi * E / (s.KL_over_r * s.KL_over_r);
-    s.lengths = fmt::format("L = ({})/{} = {} mm; r = t/√12 = {}/√12 = {} mm; K·L/r = {}·{}/{} = "
-                            "{}; Fe = π²·E/(K·L/r)² = π²·{}/{}² = {} MPa",
-                            terms, lengths.size(), num(s.L), num(t), num(s.r), num(K), num(s.L),
-                            num(s.r), num(s.KL_over_r), num(E), num(s.KL_over_r), num(s.Fe));
+    // The text in the template's units (K·L/r is the same number in any).
+    const auto len = [&](double mm) { return num(from_internal(mm, Quantity::length, units)); };
+    const auto str = [&](double mpa) { return num(from_internal(mpa, Quantity::stress, units)); };
+    const auto L_unit = unit_label(Quantity::length, units);
+    const auto S_unit = unit_label(Quantity::stress, units);
+    s.lengths = fmt::format("L = ({})/{} = {} {}; r = t/√12 = {}/√12 = {} {}; K·L/r = {}·{}/{} = "
+                            "{}; Fe = π²·E/(K·L/r)² = π²·{}/{}² = {} {}",
+                            terms, lengths.size(), len(s.L), L_unit, len(t), len(s.r), L_unit,
+                            num(K), len(s.L), len(s.r), num(s.KL_over_r), str(E), num(s.KL_over_r),
+                            str(s.Fe), S_unit);
     return s;
 }
 

@@ -49,7 +49,7 @@ int run(int argc, char** argv) {
                          "Print the program version and build, then stop");
     app.require_subcommand(1, 1);
     app.footer("Exit codes: 0 success, 1 a check fails (check), 2 bad input (every problem is "
-               "listed with file:line).\n"
+               "listed with file:line), 3 an output could not be written.\n"
                "Run `lapwing COMMAND --help` for the options of one command.");
 
     std::string kind, output;
@@ -131,8 +131,9 @@ int run(int argc, char** argv) {
                         "Write into an output folder that holds files other than lapwing's");
     check_cmd->footer(
         "Exit codes: 0 every check passes, 1 a demand exceeds its capacity, 2 bad input or a\n"
-        "model that cannot be solved. Capacities are the allowables you enter; lapwing names\n"
-        "the method of each row and does not claim code compliance.\n"
+        "model that cannot be solved, 3 an output could not be written (the folder cannot be\n"
+        "made, or holds other files without --force). Capacities are the allowables you\n"
+        "enter; lapwing names the method of each row and does not claim code compliance.\n"
         "Example: lapwing check G3.toml -o G3-out");
 
     SweepArgs sweep_args;

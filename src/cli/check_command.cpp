@@ -10,6 +10,7 @@
 #include "report/figures.hpp"
 #include "report/output_folder.hpp"
 #include "report/outputs.hpp"
+#include "report/progress_line.hpp"
 #include "report/sha256.hpp"
 #include "report/terminal_summary.hpp"
 
@@ -23,6 +24,7 @@
 #include <mutex>
 #include <ostream>
 #include <stdexcept>
+#include <sys/ioctl.h>
 #include <thread>
 #include <unistd.h>
 
@@ -36,41 +38,55 @@ bool is_terminal(const std::ostream& out) {
     return &out == &std::cout && ::isatty(STDOUT_FILENO);
 }
 
-// "working: meshing, solving and checking … 3 s" on one terminal line,
-// shown only when the step takes longer than a second, erased when done.
+// The stage that is running and the time since the run started, on one
+// terminal line redrawn twice a second; nothing for runs under a second;
+// erased when done. The text comes from report/progress_line.hpp.
 class Progress {
 public:
-    Progress(bool enabled, std::string what) {
+    explicit Progress(bool enabled) {
         if (!enabled) return;
-        thread_ = std::jthread([this, what = std::move(what)](std::stop_token stop) {
-            const auto start = std::chrono::steady_clock::now();
-            std::mutex m;
-            std::condition_variable_any cv;
-            std::unique_lock lock(m);
-            if (cv.wait_for(lock, stop, std::chrono::seconds(1), [] { return false; }) ||
-                stop.stop_requested())
+        const auto start = std::chrono::steady_clock::now();
+        thread_ = std::jthread([this, start](std::stop_token stop) {
+            std::unique_lock lock(mutex_);
+            const auto elapsed = [&] {
+                return std::chrono::duration<double>(std::chrono::steady_clock::now() - start)
+                    .count();
+            };
+            const auto delay = std::chrono::duration<double>(report::progress_delay_seconds);
+            if (wake_.wait_for(lock, stop, delay, [] { return false; }) || stop.stop_requested())
                 return;
             while (!stop.stop_requested()) {
-                const auto seconds = std::chrono::duration_cast<std::chrono::seconds>(
-                                         std::chrono::steady_clock::now() - start)
-                                         .count();
-                std::cout << fmt::format("\r\x1b[2K{} … {} s", what, seconds) << std::flush;
+                std::cout << report::progress_line(stage_, elapsed(), terminal_columns())
+                          << std::flush;
                 shown_ = true;
-                cv.wait_for(lock, stop, std::chrono::milliseconds(500), [] { return false; });
+                wake_.wait_for(lock, stop, std::chrono::milliseconds(500), [] { return false; });
             }
         });
     }
     ~Progress() { done(); }
+    // The stage now running (shown from the next redraw on).
+    void stage(std::string words) {
+        const std::lock_guard lock(mutex_);
+        stage_ = std::move(words);
+    }
     void done() {
         if (!thread_.joinable()) return;
         thread_.request_stop();
         thread_.join();
-        if (shown_) std::cout << "\r\x1b[2K" << std::flush;
+        if (shown_) std::cout << report::progress_erase() << std::flush;
     }
 
 private:
-    std::jthread thread_;
+    static int terminal_columns() {
+        winsize size{};
+        if (::ioctl(STDOUT_FILENO, TIOCGWINSZ, &size) == 0 && size.ws_col > 0) return size.ws_col;
+        return 80;
+    }
+    std::mutex mutex_;
+    std::condition_variable_any wake_;
+    std::string stage_ = "starting";
     bool shown_ = false;
+    std::jthread thread_; // started in the constructor's body, after every member above
 };
 
 std::string utc_now() {
@@ -83,24 +99,25 @@ std::string utc_now() {
 }
 
 // Creates the folder, or checks that an existing one may be written into.
+// Each refusal is an output failure (exit code 3, as for `lapwing mesh`),
+// raised before any work is done.
 void prepare_folder(const fs::path& folder, bool force) {
     std::error_code ec;
     if (!fs::exists(folder, ec)) {
         fs::create_directories(folder, ec);
         if (ec)
-            throw std::runtime_error("cannot create output folder " + folder.string() + ": " +
-                                     ec.message());
+            throw OutputError("cannot create output folder " + folder.string() + ": " +
+                              ec.message());
         return;
     }
     if (!fs::is_directory(folder, ec))
-        throw std::runtime_error("output folder " + folder.string() +
-                                 " exists and is not a folder");
+        throw OutputError("output folder " + folder.string() + " exists and is not a folder");
     std::vector<std::string> entries;
     for (const auto& entry : fs::directory_iterator(folder, ec))
         entries.push_back(entry.path().filename().string());
     std::sort(entries.begin(), entries.end());
     if (auto refusal = report::refuse_folder(folder.string(), entries, force))
-        throw std::runtime_error(*refusal);
+        throw OutputError(*refusal);
 }
 
 bool wants(const model::Connection& c, const char* format) {
@@ -121,17 +138,15 @@ int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err) {
         check::CheckOptions options;
         options.two_mesh = !args.single_mesh;
         const bool show_progress = !args.quiet && !args.json && is_terminal(out);
-        Progress progress(show_progress, options.two_mesh
-                                             ? "meshing, solving and checking (two meshes)"
-                                             : "meshing, solving and checking");
+        Progress progress(show_progress);
+        options.on_stage = [&](check::Stage s) { progress.stage(check::words(s)); };
         const check::CheckOutcome o = check::check_connection(c, options);
-        progress.done();
 
         report::SummaryOptions summary;
         summary.input_file = args.file;
         summary.colour = is_terminal(out);
         if (writing) {
-            Progress writing_progress(show_progress, "writing the calc sheet and data files");
+            progress.stage("writing the calc sheet and data files");
             report::RunInfo run;
             run.version = LAPWING_VERSION;
             run.build_id = LAPWING_BUILD_ID;
@@ -150,12 +165,13 @@ int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err) {
                 summary.files.push_back(name);
             };
             if (wants(c, "html")) put("report.html", report::calc_sheet_html(o, run, figures));
-            if (wants(c, "json")) put("results.json", report::results_json(o, run));
+            if (wants(c, "json")) put("results.json", report::results_json(o, run, figures));
             if (wants(c, "vtu")) put("model.vtu", report::model_vtu(o));
             if (c.report.figures)
                 for (const report::Figure& f : figures) put(f.file, f.svg);
             summary.folder = folder.string();
         }
+        progress.done();
         if (args.json)
             out << report::summary_json(o, summary);
         else if (!args.quiet)

@@ -32,12 +32,13 @@ std::string bolt_forces_svg(const check::CheckOutcome& o, int case_index) {
         svg += fmt::format("<circle cx=\"{:.1f}\" cy=\"{:.1f}\" r=\"2.5\" fill=\"#222\"/>\n",
                            from.x(), from.y());
         svg += arrow(from, to, "#c0392b", 1.6);
-        svg += fmt::format("<text x=\"{:.1f}\" y=\"{:.1f}\" font-size=\"9\" fill=\"#7a1f14\">{}"
+        svg += fmt::format("<text x=\"{:.1f}\" y=\"{:.1f}\" font-size=\"13\" fill=\"#7a1f14\">{}"
                            "</text>\n",
                            to.x() + 3, to.y() - 3,
                            escape(number(b.magnitude, Quantity::force, o.connection.units)));
     }
-    svg += fmt::format("<text x=\"10\" y=\"{:.1f}\">Labels: force per bolt, {}</text>\n",
+    svg += fmt::format("<text x=\"10\" y=\"{:.1f}\" font-size=\"13\">Labels: force per bolt, "
+                       "{}</text>\n",
                        canvas.height() - 8, escape(unit(Quantity::force, o.connection.units)));
     return svg + Canvas::close();
 }

@@ -9,19 +9,34 @@
 #include <cctype>
 #include <cmath>
 #include <fmt/format.h>
+#include <set>
 
 namespace lapwing::report {
 
-namespace {
-// Section ids carry member names as typed ("east diagonal L3-U4"); file
-// names keep letters, digits, '.', '-' and '_' and turn the rest into '_',
-// so they need no quoting in a shell.
+// Section ids and case names carry names as typed ("east diagonal L3-U4",
+// "1.2D + 1.6L").
 std::string file_safe(std::string name) {
     for (char& ch : name)
         if (!(std::isalnum(static_cast<unsigned char>(ch)) || ch == '.' || ch == '-' || ch == '_'))
             ch = '_';
     return name;
 }
+
+namespace {
+// Two names as typed can map to one file name ("D+L" and "D L" are both
+// "D_L"): the later one gets "-2", "-3", … so that no file overwrites another.
+class FileNames {
+public:
+    std::string take(const std::string& stem) {
+        std::string name = stem + ".svg";
+        for (int n = 2; used_.count(name); ++n) name = fmt::format("{}-{}.svg", stem, n);
+        used_.insert(name);
+        return name;
+    }
+
+private:
+    std::set<std::string> used_;
+};
 } // namespace
 
 int figure_case(const check::CheckOutcome& outcome) {
@@ -64,14 +79,15 @@ std::vector<Figure> all_figures(const check::CheckOutcome& outcome) {
     const model::Connection& c = outcome.connection;
     const UnitSystem units = c.units;
     const mesh::QualitySummary& q = outcome.mesh.quality_summary;
+    FileNames names;
     std::vector<Figure> figures;
-    figures.push_back({"geometry.svg", "Geometry",
+    figures.push_back({names.take("geometry"), "geometry", "Geometry",
                        "Plate outline with overall dimensions, bolt groups, member axes (arrows "
                        "from the work point along each member), welded edges (heavy) and section "
                        "lines (dashed).",
-                       geometry_svg(outcome)});
+                       "", geometry_svg(outcome)});
     figures.push_back(
-        {"mesh.svg", "Mesh",
+        {names.take("mesh"), "mesh", "Mesh",
          fmt::format("{} {} elements, {} nodes; element size {}. Scaled Jacobian min {:.2f}, "
                      "median {:.2f}; corner angles {:.0f}° to {:.0f}°; {:.0f} % of elements with "
                      "every angle in 30°–150°; {} inverted.",
@@ -80,36 +96,45 @@ std::vector<Figure> all_figures(const check::CheckOutcome& outcome) {
                      with_unit(outcome.element_size, Quantity::length, units),
                      q.scaled_jacobian.min, q.scaled_jacobian.median, q.min_angle_deg.min,
                      q.max_angle_deg.max, 100 * q.fraction_angles_ok, q.n_inverted),
-         mesh_svg(outcome)});
-    const int k = figure_case(outcome);
-    if (k < 0) return figures;
-    const std::string case_name = outcome.results.cases[static_cast<size_t>(k)].name;
-    figures.push_back({"contour.svg", "Von Mises stress",
-                       fmt::format("Von Mises stress from the recovered nodal stresses, load "
-                                   "case {} (the case of the governing row). Peaks are local and "
-                                   "mesh dependent.",
-                                   case_name),
-                       contour_svg(outcome, k)});
-    const double scale = deformed_scale(outcome, k);
-    figures.push_back({"deformed.svg", "Deformed shape",
-                       fmt::format("Deformed mesh, load case {}, displacements magnified {:g} "
-                                   "times; the undeformed outline in grey.",
-                                   case_name, scale),
-                       deformed_svg(outcome, k, scale)});
-    if (!outcome.results.problem.bolts.empty())
-        figures.push_back({"bolt-forces.svg", "Bolt forces",
-                           fmt::format("Force each bolt puts on the plate, load case {}; arrow "
-                                       "length proportional to the force.",
-                                       case_name),
-                           bolt_forces_svg(outcome, k)});
+         "", mesh_svg(outcome)});
+    const int governing = figure_case(outcome);
+    for (size_t k = 0; k < outcome.results.cases.size(); ++k) {
+        const int ki = static_cast<int>(k);
+        const std::string& name = outcome.results.cases[k].name;
+        const std::string stem = file_safe(name);
+        const std::string which = ki == governing && outcome.table.governing >= 0
+                                      ? " (the case of the governing row)"
+                                      : "";
+        figures.push_back({names.take("contour-" + stem), "contour", "Von Mises stress",
+                           fmt::format("Von Mises stress from the recovered nodal stresses, load "
+                                       "case {}{}. Colour scale from zero to this case's largest "
+                                       "nodal value. Peaks are local and mesh dependent.",
+                                       name, which),
+                           name, contour_svg(outcome, ki)});
+        const double scale = deformed_scale(outcome, ki);
+        figures.push_back({names.take("deformed-" + stem), "deformed", "Deformed shape",
+                           fmt::format("Deformed mesh, load case {}, displacements magnified {:g} "
+                                       "times; the undeformed outline in grey.",
+                                       name, scale),
+                           name, deformed_svg(outcome, ki, scale)});
+        if (!outcome.results.problem.bolts.empty())
+            figures.push_back({names.take("bolt-forces-" + stem), "bolt-forces", "Bolt forces",
+                               fmt::format("Force each bolt puts on the plate, load case {}; "
+                                           "arrow length proportional to the force, the largest "
+                                           "a tenth of the drawing's width.",
+                                           name),
+                               name, bolt_forces_svg(outcome, ki)});
+    }
+    if (governing < 0) return figures;
+    const std::string& case_name = outcome.results.cases[static_cast<size_t>(governing)].name;
     for (size_t s = 0; s < outcome.sections.size(); ++s)
         figures.push_back(
-            {"section-" + file_safe(outcome.sections[s].id) + ".svg",
+            {names.take("section-" + file_safe(outcome.sections[s].id)), "section",
              "Section " + outcome.sections[s].id,
              fmt::format("Normal, shear and von Mises stress along {}, load case {}, against "
                          "the distance from its start.",
                          outcome.sections[s].label, case_name),
-             section_profile_svg(outcome, k, static_cast<int>(s))});
+             case_name, section_profile_svg(outcome, governing, static_cast<int>(s))});
     return figures;
 }
 

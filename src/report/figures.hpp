@@ -12,14 +12,21 @@
 namespace lapwing::report {
 
 struct Figure {
-    std::string file;    // e.g. "contour.svg"
-    std::string title;   // heading on the sheet
-    std::string caption; // what the figure shows, with its scale or case
+    std::string file;      // e.g. "contour-D_L.svg": distinct, no spaces
+    std::string kind;      // "geometry", "mesh", "contour", "deformed", "bolt-forces", "section"
+    std::string title;     // heading on the sheet
+    std::string caption;   // what the figure shows, with its scale or case
+    std::string load_case; // the case or combination shown; empty for geometry and mesh
     std::string svg;
 };
 
-// The load case the figures show: the one of the governing row, else the first.
+// The load case the section profiles show: the one of the governing row,
+// else the first.
 int figure_case(const check::CheckOutcome& outcome);
+
+// A file-name piece from a name as typed: letters, digits, '.', '-' and '_'
+// kept, anything else '_', so the name needs no quoting in a shell.
+std::string file_safe(std::string name);
 
 double von_mises(const fe::Stress& s); // plane stress: √(σx² − σxσy + σy² + 3τ²)
 
@@ -35,7 +42,9 @@ std::string deformed_svg(const check::CheckOutcome& outcome, int case_index, dou
 std::string bolt_forces_svg(const check::CheckOutcome& outcome, int case_index);
 std::string section_profile_svg(const check::CheckOutcome& outcome, int case_index, int section);
 
-// Every figure of the sheet in order (one profile per section line).
+// Every figure of the sheet in order: geometry and mesh; for every load case
+// and combination its contour, deformed shape and bolt forces; then one
+// stress profile per section line for the governing case.
 std::vector<Figure> all_figures(const check::CheckOutcome& outcome);
 
 } // namespace lapwing::report

@@ -25,6 +25,16 @@ std::string ratio_bar(const check::CheckRow& r) {
                        r.status == check::Status::fail ? " fail" : "", width);
 }
 
+// The published forms' worked formulas (src/check/limit_states.cpp) carry
+// the program's internal N, mm and MPa, each number with its unit; outside
+// N-mm the sheet says so once rather than leave a silent mix.
+std::string formula_units(UnitSystem u) {
+    if (u == UnitSystem::n_mm) return "";
+    return "; the worked formulas of the published forms are evaluated in N, mm and MPa, the "
+           "program's internal units, and say so beside each number (1 in = 25.4 mm, "
+           "1 kip = 4.448 kN, 1 ksi = 6.895 MPa; NIST SP 811)";
+}
+
 } // namespace
 
 std::string check_table_html(const check::CheckOutcome& o) {
@@ -36,6 +46,8 @@ std::string check_table_html(const check::CheckOutcome& o) {
          "or a published form evaluated with the user's values, as named under <i>method</i>. "
          "Ratio = demand / capacity; the bar's tick marks 1.0. Rows without a capacity are for "
          "information.</p>\n";
+    h += fmt::format("<p>Demands, capacities and locations are in {}{}.</p>\n",
+                     escape(std::string(name(u))), formula_units(u));
     for (const check::Family family : check::all_families) {
         bool any = false;
         for (const check::CheckRow& r : t.rows) any = any || r.family == family;

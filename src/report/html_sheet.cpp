@@ -67,13 +67,61 @@ std::string cautions(const check::CheckOutcome& o, const RunInfo& run) {
     return h;
 }
 
-std::string figures_html(const std::vector<Figure>& figures) {
-    std::string h = "<h2>Figures</h2>\n";
-    for (const Figure& f : figures)
-        h +=
-            fmt::format("<figure id=\"fig-{}\"><h3>{}</h3>\n{}<figcaption>{} (also {})</figcaption>"
-                        "</figure>\n",
-                        escape(f.file), escape(f.title), f.svg, escape(f.caption), escape(f.file));
+// "(also FILE)" only when the .svg files are written beside the sheet.
+std::string figure_html(const Figure& f, const char* heading, bool files_written) {
+    return fmt::format("<figure id=\"fig-{0}\"><{1}>{2}</{1}>\n{3}<figcaption>{4}{5}"
+                       "</figcaption></figure>\n",
+                       escape(f.file), heading, escape(f.title), f.svg, escape(f.caption),
+                       files_written ? " (also " + escape(f.file) + ")" : std::string());
+}
+
+// Figures grouped as a reviewer reads them: the model (geometry, mesh),
+// then one group per load case or combination (its contour, deformed shape
+// and bolt forces side by side), then the section profiles; a list of the
+// groups first, so a case is one click away.
+std::string figures_html(const check::CheckOutcome& o, const std::vector<Figure>& figures) {
+    struct Group {
+        std::string id, heading;
+        std::vector<const Figure*> members;
+        bool per_case = false;
+    };
+    std::vector<Group> groups;
+    const int governing = figure_case(o);
+    const std::string governing_case = governing >= 0 && o.table.governing >= 0
+                                           ? o.results.cases[static_cast<size_t>(governing)].name
+                                           : std::string();
+    for (const Figure& f : figures) {
+        std::string key = f.kind == "section" ? "sections" : f.load_case;
+        if (groups.empty() || groups.back().id != key) {
+            Group g;
+            g.id = key;
+            if (f.load_case.empty()) {
+                g.heading = "Model";
+            } else if (f.kind == "section") {
+                g.heading = "Section stress profiles, load case " + f.load_case;
+            } else {
+                bool combination = false;
+                for (const analysis::CaseResult& r : o.results.cases)
+                    if (r.name == f.load_case) combination = r.combination;
+                g.heading = (combination ? "Combination " : "Load case ") + f.load_case +
+                            (f.load_case == governing_case ? " (governing)" : "");
+                g.per_case = true;
+            }
+            groups.push_back(std::move(g));
+        }
+        groups.back().members.push_back(&f);
+    }
+    std::string h = "<h2>Figures</h2>\n<ul class=\"figure-index\">";
+    for (size_t i = 0; i < groups.size(); ++i)
+        h += fmt::format("<li><a href=\"#figures-{}\">{}</a></li>", i, escape(groups[i].heading));
+    h += "</ul>\n";
+    for (size_t i = 0; i < groups.size(); ++i) {
+        const Group& g = groups[i];
+        h += fmt::format("<div class=\"figure-group{}\" id=\"figures-{}\"><h3>{}</h3>\n",
+                         g.per_case ? " per-case" : "", i, escape(g.heading));
+        for (const Figure* f : g.members) h += figure_html(*f, "h4", o.connection.report.figures);
+        h += "</div>\n";
+    }
     return h;
 }
 
@@ -113,7 +161,7 @@ std::string calc_sheet_html(const check::CheckOutcome& o, const RunInfo& run,
          "elements</p>\n";
     h += title_block(o, run) + verdict(o) + cautions(o, run) + "</section>\n";
     h += "<section class=\"sheet\" id=\"inputs\">\n" + inputs_html(o) + "</section>\n";
-    h += "<section class=\"sheet\" id=\"figures\">\n" + figures_html(figures) + "</section>\n";
+    h += "<section class=\"sheet\" id=\"figures\">\n" + figures_html(o, figures) + "</section>\n";
     h += "<section class=\"sheet\" id=\"results\">\n" + results_html(o) + "</section>\n";
     h += "<section class=\"sheet\" id=\"checks\">\n" + check_table_html(o) + convergence_html(o) +
          "</section>\n";

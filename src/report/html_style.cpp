@@ -56,11 +56,25 @@ td.n { text-align: right; font-variant-numeric: tabular-nums; white-space: nowra
 figure { margin: 12px 0 20px; break-inside: avoid; page-break-inside: avoid; }
 figure svg { max-width: 100%; height: auto; display: block; border: 1px solid var(--rule); background: #fff; }
 figcaption { font-size: 12px; color: var(--muted); margin-top: 4px; }
+h4 { font-size: 13px; margin: 0 0 4px; }
+.figure-index { columns: 2; font-size: 12.5px; padding-left: 18px; }
+.figure-group > h3 { border-bottom: 1px solid var(--rule); padding-bottom: 2px; }
+.figure-group.per-case { display: grid; grid-template-columns: 1fr 1fr; column-gap: 16px; }
+.figure-group.per-case > h3 { grid-column: 1 / -1; }
+.figure-group.per-case figure { margin: 6px 0 12px; }
+/* The contour spans the page so that its legend stays legible; the deformed
+   shape and the bolt forces share the row below. */
+.figure-group.per-case figure:first-of-type { grid-column: 1 / -1; }
 .bar { position: relative; width: 120px; height: 11px; background: var(--band); border: 1px solid var(--rule); }
 .bar i { position: absolute; left: 0; top: 0; bottom: 0; background: var(--pass); }
 .bar.fail i { background: var(--fail); }
 .bar b { position: absolute; left: 83.3%; top: -2px; bottom: -2px; border-left: 1.5px solid var(--ink); }
 tr.governing td { background: #fff4cc; font-weight: 600; }
+/* Ten columns must fit a portrait A4 or Letter page: long ids wrap anywhere
+   and the worked formulas are small, so the status stays on the paper. */
+table.checks th:first-child { width: 17%; }
+table.checks td:first-child { overflow-wrap: anywhere; }
+table.checks td .muted { font-size: 10.5px; }
 .status-pass { color: var(--pass); font-weight: 600; }
 .status-fail { color: var(--fail); font-weight: 700; }
 .status-info { color: var(--info); }
@@ -71,6 +85,10 @@ pre { background: var(--band); padding: 8px; font-size: 11px; white-space: pre-w
   section.sheet { break-before: page; page-break-before: always; }
   section.sheet:first-of-type { break-before: auto; }
   h2 { margin-top: 0; }
+  .figure-group.per-case { break-inside: avoid; page-break-inside: avoid; }
+  table.checks { font-size: 7.5pt; }
+  table.checks td .muted { font-size: 6.5pt; }
+  table.checks .bar { width: 48px; }
   tr, .title-block { break-inside: avoid; page-break-inside: avoid; }
   thead { display: table-header-group; }
   * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }

@@ -283,7 +283,8 @@ struct Writer {
 
 } // namespace
 
-std::string results_json(const check::CheckOutcome& o, const RunInfo& run) {
+std::string results_json(const check::CheckOutcome& o, const RunInfo& run,
+                         const std::vector<Figure>& figures) {
     const Writer w{o};
     const model::Job& job = o.connection.job;
     json j;
@@ -337,6 +338,16 @@ std::string results_json(const check::CheckOutcome& o, const RunInfo& run) {
     for (size_t k = 0; k < o.results.cases.size(); ++k) j["cases"].push_back(w.case_object(k));
     j["checks"] = w.checks_object();
     j["convergence"] = w.convergence_object();
+    // The figures as listed on the sheet; the .svg files exist beside this
+    // file when report.figures is on (they are always inline in report.html).
+    j["figures"] = json::array();
+    for (const Figure& f : figures)
+        j["figures"].push_back({{"file", f.file},
+                                {"kind", f.kind},
+                                {"title", f.title},
+                                {"load_case", f.load_case.empty() ? json() : json(f.load_case)},
+                                {"caption", f.caption},
+                                {"file_written", o.connection.report.figures}});
     return j.dump(2) + "\n";
 }
 

@@ -11,7 +11,12 @@ bool is_lapwing_output(const std::string& name) {
     for (const char* fixed : {"report.html", "results.json", "model.vtu", "geometry.svg",
                               "mesh.svg", "contour.svg", "deformed.svg", "bolt-forces.svg"})
         if (name == fixed) return true;
-    return name.starts_with("section-") && name.ends_with(".svg");
+    // Per-case figures (contour-CASE.svg, …) and section profiles; the
+    // single-case names above are those of earlier versions.
+    if (!name.ends_with(".svg")) return false;
+    for (const char* prefix : {"section-", "contour-", "deformed-", "bolt-forces-"})
+        if (name.starts_with(prefix)) return true;
+    return false;
 }
 
 std::optional<std::string> refuse_folder(const std::string& folder,

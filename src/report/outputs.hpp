@@ -15,8 +15,10 @@ namespace lapwing::report {
 std::string calc_sheet_html(const check::CheckOutcome& outcome, const RunInfo& run,
                             const std::vector<Figure>& figures);
 
-// results.json: everything on the sheet as data (schema: docs/results.schema.json).
-std::string results_json(const check::CheckOutcome& outcome, const RunInfo& run);
+// results.json: everything on the sheet as data (schema: docs/results.schema.json),
+// with the list of `figures` (all_figures) under "figures".
+std::string results_json(const check::CheckOutcome& outcome, const RunInfo& run,
+                         const std::vector<Figure>& figures = {});
 
 // model.vtu: the mesh with displacements, stresses and von Mises per case.
 std::string model_vtu(const check::CheckOutcome& outcome);

@@ -56,3 +56,25 @@ TEST_CASE("check pipeline: every family of the web splice, and convergence of bo
             r.quantity.rfind("shear force V", 0) == 0)
             CHECK_MESSAGE(std::abs(r.change()) < 0.02, r.quantity);
 }
+
+TEST_CASE("check pipeline: the stage callback sees every stage once, in the order they run") {
+    // A coarse mesh keeps this quick; the stages do not depend on it.
+    const model::Connection c =
+        load_template("web-splice.toml", {"mesh.size=30", "mesh.near_hole_size=10"});
+    std::vector<check::Stage> seen;
+    check::CheckOptions options;
+    options.on_stage = [&](check::Stage s) { seen.push_back(s); };
+    const check::CheckOutcome o = check::check_connection(c, options);
+    REQUIRE(o.convergence.done);
+    const std::vector<check::Stage> expected = {check::Stage::model, check::Stage::checks,
+                                                check::Stage::convergence,
+                                                check::Stage::comparison};
+    CHECK(seen == expected);
+    for (const check::Stage s : expected) CHECK(std::string(check::words(s)).size() > 3);
+
+    // Without the convergence mesh its two stages do not appear.
+    seen.clear();
+    options.two_mesh = false;
+    check::check_connection(c, options);
+    CHECK(seen == std::vector<check::Stage>{check::Stage::model, check::Stage::checks});
+}

@@ -30,6 +30,22 @@ jsonschema.Draft7Validator.check_schema(schema)
 jsonschema.validate(results, schema)
 ok("results.json validates against docs/results.schema.json")
 
+# --- the figures: every case has its own, each listed one is on disk --------
+import os
+figures = results["figures"]
+files = [f["file"] for f in figures]
+assert len(files) == len(set(files)), files
+assert all(" " not in f for f in files), files
+for kind in ("contour", "deformed", "bolt-forces"):
+    shown = sorted(f["load_case"] for f in figures if f["kind"] == kind)
+    assert shown == sorted(c["name"] for c in results["cases"]), (kind, shown)
+for f in figures:
+    assert f["file_written"] and os.path.isfile(out + "/" + f["file"]), f["file"]
+svgs = sorted(os.path.basename(p) for p in glob.glob(out + "/*.svg"))
+assert svgs == sorted(files), (svgs, files)
+ok(f"figures: {len(files)} distinct files, contour/deformed/bolt forces for each of "
+   f"{len(results['cases'])} cases, each on disk and listed")
+
 # --- input hash against coreutils sha256sum ---------------------------------
 expected = open(work + "/sha256.txt").read().split()[0]
 assert results["run"]["input_sha256"] == expected, (results["run"]["input_sha256"], expected)
