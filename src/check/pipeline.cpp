@@ -31,8 +31,12 @@ namespace {
 void compare(const Evaluation& coarse, const Evaluation& fine, Convergence& out) {
     for (size_t k = 0; k < coarse.results.cases.size(); ++k) {
         const std::string& lc = coarse.results.cases[k].name;
-        out.rows.push_back({"peak von Mises", lc, Quantity::stress, coarse.peaks[k].von_mises,
-                            fine.peaks[k].von_mises});
+        out.rows.push_back({"peak von Mises away from bolt holes", lc, Quantity::stress,
+                            coarse.peaks[k].von_mises_away, fine.peaks[k].von_mises_away});
+        if (coarse.peaks[k].has_hole_zone && fine.peaks[k].has_hole_zone)
+            out.rows.push_back({"peak von Mises at bolt holes", lc, Quantity::stress,
+                                coarse.peaks[k].von_mises_at_holes,
+                                fine.peaks[k].von_mises_at_holes});
         out.rows.push_back({"largest principal stress", lc, Quantity::stress,
                             coarse.peaks[k].max_principal, fine.peaks[k].max_principal});
         for (size_t s = 0; s < coarse.sections.size() && s < fine.sections.size(); ++s) {
@@ -41,8 +45,8 @@ void compare(const Evaluation& coarse, const Evaluation& fine, Convergence& out)
             const std::string& id = coarse.sections[s].id;
             out.rows.push_back(
                 {fmt::format("normal force N, {}", id), lc, Quantity::force, a.N, b.N});
-            out.rows.push_back({fmt::format("shear force V, {}", id), lc, Quantity::force, a.V,
-                                b.V});
+            out.rows.push_back(
+                {fmt::format("shear force V, {}", id), lc, Quantity::force, a.V, b.V});
             out.rows.push_back({fmt::format("membrane stress, {}", id), lc, Quantity::stress,
                                 a.max_membrane, b.max_membrane});
             out.rows.push_back({fmt::format("membrane + bending, {}", id), lc, Quantity::stress,
