@@ -85,12 +85,24 @@ PeakStress find_peaks(const analysis::FeProblem& problem, const analysis::PlateL
     const double lowest = -std::numeric_limits<double>::infinity();
     Candidate vm{lowest, {0, 0}}, s1{lowest, {0, 0}},
         s2{std::numeric_limits<double>::infinity(), {0, 0}};
+    Candidate away{lowest, {0, 0}}, at_holes{lowest, {0, 0}};
+    const double zone = connection.allowables.peak.bolt_hole_zone;
+    const auto in_hole_zone = [&](const Eigen::Vector2d& at) {
+        if (zone <= 0) return false; // one search over the whole plate
+        for (const geometry::Hole& h : layout.region.holes) {
+            const double size = h.shape == geometry::HoleShape::circle ? h.diameter : h.width;
+            if (distance_to_hole(h, at) < zone * size) return true;
+        }
+        return false;
+    };
     const auto consider = [&](const fe::Stress& s, const Eigen::Vector2d& at) {
         const double v = fe::von_mises(s);
         const fe::Principal p = fe::principal(s);
         if (v > vm.value) vm = {v, at};
         if (p.s1 > s1.value) s1 = {p.s1, at};
         if (p.s2 < s2.value) s2 = {p.s2, at};
+        Candidate& part = in_hole_zone(at) ? at_holes : away;
+        if (v > part.value) part = {v, at};
     };
     const fe::Model& model = problem.model;
     for (size_t n = 0; n < result.nodal_stress.size(); ++n)
@@ -106,6 +118,18 @@ PeakStress find_peaks(const analysis::FeProblem& problem, const analysis::PlateL
     peak.min_principal = s2.value;
     peak.min_principal_at = s2.at;
     peak.near = describe_location(layout, connection, vm.at);
+    // A plate whose every sample point lies in some hole zone (absurdly
+    // dense bolts) has no "away" peak: the overall one stands in for it.
+    if (away.value == lowest) away = vm;
+    peak.von_mises_away = away.value;
+    peak.von_mises_away_at = away.at;
+    peak.near_away = describe_location(layout, connection, away.at);
+    peak.has_hole_zone = at_holes.value != lowest;
+    if (peak.has_hole_zone) {
+        peak.von_mises_at_holes = at_holes.value;
+        peak.von_mises_at_holes_at = at_holes.at;
+        peak.near_at_holes = describe_location(layout, connection, at_holes.at);
+    }
     return peak;
 }
 

@@ -45,8 +45,12 @@ namespace {
 void compare(const Evaluation& coarse, const Evaluation& fine, Convergence& out) {
     for (size_t k = 0; k < coarse.results.cases.size(); ++k) {
         const std::string& lc = coarse.results.cases[k].name;
-        out.rows.push_back({"peak von Mises", lc, Quantity::stress, coarse.peaks[k].von_mises,
-                            fine.peaks[k].von_mises});
+        out.rows.push_back({"peak von Mises away from bolt holes", lc, Quantity::stress,
+                            coarse.peaks[k].von_mises_away, fine.peaks[k].von_mises_away});
+        if (coarse.peaks[k].has_hole_zone && fine.peaks[k].has_hole_zone)
+            out.rows.push_back({"peak von Mises at bolt holes", lc, Quantity::stress,
+                                coarse.peaks[k].von_mises_at_holes,
+                                fine.peaks[k].von_mises_at_holes});
         out.rows.push_back({"largest principal stress", lc, Quantity::stress,
                             coarse.peaks[k].max_principal, fine.peaks[k].max_principal});
         for (size_t s = 0; s < coarse.sections.size() && s < fine.sections.size(); ++s) {

@@ -56,6 +56,19 @@ struct PeakStress {
     double min_principal = 0; // smallest σ2 (most compressive), MPa
     Eigen::Vector2d min_principal_at{0, 0};
     std::string near; // words for the location, e.g. "edge of hole brace[2]"
+    // The same search outside the bolt-hole zones (points closer than half a
+    // hole diameter to a bolt hole's edge are left out): there the elastic
+    // bearing peak stands in for a contact pressure that the bearing and
+    // tear-out rows check; elsewhere (re-entrant corners, copes, free edges)
+    // a peak is what the peak row is for. Equal to von_mises when the plate
+    // has no holes.
+    double von_mises_away = 0;
+    Eigen::Vector2d von_mises_away_at{0, 0};
+    std::string near_away;
+    bool has_hole_zone = false;    // some sample point fell inside a bolt-hole zone
+    double von_mises_at_holes = 0; // highest von Mises inside the zones
+    Eigen::Vector2d von_mises_at_holes_at{0, 0};
+    std::string near_at_holes;
 };
 
 // One value on the model's mesh and on the finer mesh.

@@ -45,9 +45,21 @@ std::vector<CheckRow> stress_rows(const model::Connection& c, const Evaluation& 
         const std::string& lc = e.results.cases[k].name;
         const PeakStress& p = e.peaks[k];
         rows.push_back(user_row(fmt::format("peak:{}", lc), Family::peak_stress,
-                                "peak von Mises stress (local, mesh dependent)", p.near, lc,
-                                "peak_von_mises", al.peak_von_mises, Quantity::stress, p.von_mises,
-                                c.units));
+                                "peak von Mises stress away from bolt holes (local, mesh "
+                                "dependent)",
+                                p.near_away, lc, "peak_von_mises", al.peak_von_mises,
+                                Quantity::stress, p.von_mises_away, c.units));
+        if (p.has_hole_zone) {
+            CheckRow r = user_row(fmt::format("peak-at-holes:{}", lc), Family::peak_stress,
+                                  "peak von Mises stress at bolt holes (elastic bearing peak, "
+                                  "local, mesh dependent)",
+                                  p.near_at_holes, lc, "peak_von_mises_at_bolt_holes",
+                                  al.peak_von_mises_at_bolt_holes, Quantity::stress,
+                                  p.von_mises_at_holes, c.units);
+            if (!al.peak_von_mises_at_bolt_holes.given)
+                r.formula += "; the bearing and tear-out rows check the bolt holes";
+            rows.push_back(std::move(r));
+        }
         // Sections: linearized stresses against the user's allowables; a
         // family left out of [allowables] gives no rows (the profiles and
         // resultants are still on the calc sheet).

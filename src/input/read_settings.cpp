@@ -77,6 +77,16 @@ void read_allowables(Table& root, model::Allowables& allowables) {
                 .value_or(d.resistance_factor);
         b.finish();
     }
+    {
+        Table b = t.table("peak", false);
+        const model::PeakZones d;
+        // Beyond two diameters the zone would swallow whole bolt patterns
+        // and the corners next to them.
+        allowables.peak.bolt_hole_zone =
+            b.number("bolt_hole_zone", Quantity::none, Bound::range(0.0, 2.0), d.bolt_hole_zone)
+                .value_or(d.bolt_hole_zone);
+        b.finish();
+    }
     t.finish();
 }
 

@@ -196,6 +196,7 @@ std::string write_resolved(const model::Connection& c) {
         number(bs.gamma_M0), number(bs.gamma_M2));
     out("\n[allowables.whitmore_buckling]\nK = {}\nresistance_factor = {}",
         number(a.whitmore_buckling.K), number(a.whitmore_buckling.resistance_factor));
+    out("\n[allowables.peak]\nbolt_hole_zone = {}", number(a.peak.bolt_hole_zone));
 
     out("\n[mesh]\nelement = \"{}\"\nsize = {}\naround_hole = {}\nnear_hole_size = {}",
         model::word(model::element_words, c.mesh.element), out.q(c.mesh.size, Quantity::length),

@@ -207,6 +207,8 @@ std::string summarize(const model::Connection& c) {
                    bs.Ubs, bs.gamma_M0, bs.gamma_M2));
     w.line(1, fmt::format("Whitmore buckling: K {:.6g}, resistance factor {:.6g}",
                           a.whitmore_buckling.K, a.whitmore_buckling.resistance_factor));
+    w.line(1, fmt::format("peak zones: bolt holes within {:.6g} hole diameters of the edge",
+                          a.peak.bolt_hole_zone));
 
     w.line(0, fmt::format("mesh: {} elements, size {}, {} around each hole, {} next to holes",
                           model::word(model::element_words, c.mesh.element),

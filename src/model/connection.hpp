@@ -206,8 +206,19 @@ struct WhitmoreBuckling {
     double resistance_factor = 0.9;
 };
 
+// Which peaks count as "at a bolt hole": points closer to a bolt hole's edge
+// than bolt_hole_zone times its diameter (a slot: its width). 0 puts every
+// peak in the one `peak_von_mises` row. See src/check/peaks.hpp.
+struct PeakZones {
+    double bolt_hole_zone = 0.5;
+};
+
 struct Allowables {
+    // Peak von Mises outside the bolt-hole zones (check/peaks.hpp), and
+    // inside them; the second is usually left unset (information only), as
+    // the bearing and tear-out rows check the holes.
     Allowable peak_von_mises;
+    Allowable peak_von_mises_at_bolt_holes;
     Allowable section_membrane;
     Allowable membrane_plus_bending;
     Allowable section_shear;
@@ -220,6 +231,7 @@ struct Allowables {
     BearingAllowable bearing;
     BlockShearAllowable block_shear;
     WhitmoreBuckling whitmore_buckling;
+    PeakZones peak;
 };
 
 // The capacities entered as one number or expression each, with their
@@ -232,7 +244,10 @@ struct AllowableEntry {
     Quantity quantity;
 };
 inline constexpr AllowableEntry allowable_entries[] = {
-    {"peak_von_mises", "peak von Mises", &Allowables::peak_von_mises, Quantity::stress},
+    {"peak_von_mises", "peak von Mises away from bolt holes", &Allowables::peak_von_mises,
+     Quantity::stress},
+    {"peak_von_mises_at_bolt_holes", "peak von Mises at bolt holes",
+     &Allowables::peak_von_mises_at_bolt_holes, Quantity::stress},
     {"section_membrane", "section membrane", &Allowables::section_membrane, Quantity::stress},
     {"membrane_plus_bending", "membrane + bending", &Allowables::membrane_plus_bending,
      Quantity::stress},

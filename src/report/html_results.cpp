@@ -57,6 +57,16 @@ std::string results_html(const check::CheckOutcome& o) {
                              lbl("at", Quantity::length)});
             h += row({"von Mises" + (p.near.empty() ? "" : ", " + escape(p.near)),
                       val(p.von_mises, Quantity::stress), escape(at(p.von_mises_at))});
+            h += row({"von Mises away from bolt holes" +
+                          (p.near_away.empty() ? "" : ", " + escape(p.near_away)),
+                      val(p.von_mises_away, Quantity::stress), escape(at(p.von_mises_away_at))});
+            if (p.has_hole_zone)
+                h += row({fmt::format("von Mises at bolt holes (within {:.3g} diameters of "
+                                      "the edge)",
+                                      o.connection.allowables.peak.bolt_hole_zone) +
+                              (p.near_at_holes.empty() ? "" : ", " + escape(p.near_at_holes)),
+                          val(p.von_mises_at_holes, Quantity::stress),
+                          escape(at(p.von_mises_at_holes_at))});
             h += row({"largest principal σ1", val(p.max_principal, Quantity::stress),
                       escape(at(p.max_principal_at))});
             h += row({"smallest principal σ2", val(p.min_principal, Quantity::stress),

@@ -54,9 +54,17 @@ std::string cautions(const check::CheckOutcome& o, const RunInfo& run) {
          "the first newton); friction; out-of-plane bending and out-of-plane buckling of the "
          "plate, unless a buckling row in the check table says otherwise; the members' own "
          "stresses; weld metal and heat-affected zones; residual stresses.</li>\n";
-    h += "<li><b>Peak stresses are local and mesh dependent.</b> At hole edges and re-entrant "
-         "corners a peak grows as the mesh is refined; compare it with an allowable meant for "
-         "local peaks, and use the section-averaged rows for the plate's strength.</li>\n";
+    h += fmt::format(
+        "<li><b>Peak stresses are local and mesh dependent.</b> At hole edges and re-entrant "
+        "corners a peak grows as the mesh is refined; compare it with an allowable meant for "
+        "local peaks, and use the section-averaged rows for the plate's strength. The peak "
+        "rows keep bolt holes apart: within {:.3g} hole diameters of a bolt hole's edge "
+        "(<code>[allowables.peak] bolt_hole_zone</code>) the elastic peak stands in for the "
+        "bolt's bearing pressure, which the bearing and tear-out rows check; "
+        "<code>peak_von_mises</code> applies to the rest of the plate (re-entrant corners, "
+        "copes, free edges). The bearing field fades gradually, so the row away from the holes "
+        "often peaks at the zone's edge: widen the zone only with judgement.</li>\n",
+        o.connection.allowables.peak.bolt_hole_zone);
     if (!run.two_mesh || !o.convergence.done)
         h += "<li><b>Single mesh.</b> This run skipped the finer convergence mesh.</li>\n";
     h += "<li><b>Capacities are the user's.</b> lapwing evaluates the allowables and published "

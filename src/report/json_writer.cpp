@@ -176,6 +176,15 @@ struct Writer {
                          {"min_principal", v(p.min_principal, Quantity::stress)},
                          {"min_principal_at", xy(p.min_principal_at, Quantity::length)},
                          {"near", p.near}};
+            j["peak"]["away_from_bolt_holes"] = {
+                {"von_mises", v(p.von_mises_away, Quantity::stress)},
+                {"at", xy(p.von_mises_away_at, Quantity::length)},
+                {"near", p.near_away}};
+            if (p.has_hole_zone)
+                j["peak"]["at_bolt_holes"] = {
+                    {"von_mises", v(p.von_mises_at_holes, Quantity::stress)},
+                    {"at", xy(p.von_mises_at_holes_at, Quantity::length)},
+                    {"near", p.near_at_holes}};
         }
         j["bolts"] = json::array();
         for (const analysis::BoltForce& b : c.bolts) {
