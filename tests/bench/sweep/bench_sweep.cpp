@@ -30,6 +30,7 @@
 #include <cstdlib>
 #include <cstring>
 #include <fstream>
+#include <mutex>
 #include <sstream>
 #include <string>
 #include <thread>
@@ -63,9 +64,10 @@ struct Config {
     const char* name;
     int threads;
     bool reuse;
-    std::vector<double> wall;        // per round, s
-    std::vector<double> cpu;         // per round: process CPU time, s
-    std::vector<double> sum_variant; // per round: Σ per-variant seconds
+    std::vector<double> wall;                   // per round, s
+    std::vector<double> cpu;                    // per round: process CPU time, s
+    std::vector<double> sum_variant;            // per round: Σ per-variant seconds
+    std::vector<double> sum_mesh, sum_analysis; // per round: Σ of those stages' seconds
     check::ReuseStats reuse_stats;
 };
 
@@ -115,10 +117,10 @@ int main(int argc, char** argv) {
                 repeats == 1 ? "" : "s");
     std::printf("load average at start: %s\n", first_line_of("/proc/loadavg", "").c_str());
 
-    std::vector<Config> configs = {{"-j 1, reuse", 1, true, {}, {}, {}, {}},
-                                   {"-j 2, reuse", 2, true, {}, {}, {}, {}},
-                                   {"-j 1, no reuse", 1, false, {}, {}, {}, {}}};
-    if (all) configs.push_back({"-j 2, no reuse", 2, false, {}, {}, {}, {}});
+    std::vector<Config> configs = {{"-j 1, reuse", 1, true, {}, {}, {}, {}, {}, {}},
+                                   {"-j 2, reuse", 2, true, {}, {}, {}, {}, {}, {}},
+                                   {"-j 1, no reuse", 1, false, {}, {}, {}, {}, {}, {}}};
+    if (all) configs.push_back({"-j 2, no reuse", 2, false, {}, {}, {}, {}, {}, {}});
     std::string reference_csv;
     int n_pass = 0;
     for (int round = 0; round < repeats; ++round)
@@ -127,6 +129,16 @@ int main(int argc, char** argv) {
             options.threads = cfg.threads;
             options.two_mesh = !single_mesh;
             options.reuse = cfg.reuse;
+            // Where a variant's time goes (the pipeline's own stage timers):
+            // reuse can save at most the meshing and the symbolic analysis.
+            std::mutex stage_mutex;
+            double mesh_s = 0, analysis_s = 0;
+            options.on_outcome = [&](const sweep::Variant&, const check::CheckOutcome& o) {
+                std::lock_guard lock(stage_mutex);
+                mesh_s += o.seconds.mesh;
+                analysis_s += o.seconds.analysis;
+                return std::string();
+            };
             sweep::Runner runner(text, "L3-gusset.toml", {}, options);
             const double cpu_start = cpu_seconds();
             const auto start = std::chrono::steady_clock::now();
@@ -150,6 +162,8 @@ int main(int argc, char** argv) {
             cfg.wall.push_back(wall);
             cfg.cpu.push_back(cpu);
             cfg.sum_variant.push_back(sum);
+            cfg.sum_mesh.push_back(mesh_s);
+            cfg.sum_analysis.push_back(analysis_s);
             cfg.reuse_stats = runner.reuse_stats();
             std::printf("round %d  %-15s wall %8.2f s  cpu %8.2f s\n", round + 1, cfg.name, wall,
                         cpu);
@@ -169,6 +183,10 @@ int main(int argc, char** argv) {
                                std::to_string(c.reuse_stats.solvers_built))
                                   .c_str()
                             : "every variant (no cache)");
+    std::printf("\n%-15s %12s %12s   (Σ over the variants, s; the rest is the checks)\n",
+                "configuration", "mesh", "analysis");
+    for (const Config& c : configs)
+        std::printf("%-15s %12.2f %12.2f\n", c.name, median(c.sum_mesh), median(c.sum_analysis));
     const double a = median(configs[0].wall), b = median(configs[1].wall),
                  c = median(configs[2].wall);
     std::printf("\nparallel efficiency T(-j 1) / (2 T(-j 2)), reuse on: %.2f\n", a / (2 * b));
