@@ -163,10 +163,18 @@ int run(int argc, char** argv) {
                         "Skip the finer convergence mesh of each variant (quicker)");
     sweep_cmd->add_flag("--no-reuse", sweep_args.no_reuse,
                         "Mesh and factorize every variant afresh (for timing comparisons)");
+    sweep_cmd->add_flag("--reports", sweep_args.reports,
+                        "Also write each variant's calc sheet and data files, as lapwing check -o "
+                        "would, into DIR/variants/NAME/ (NAME from the variant's number and "
+                        "values)");
+    sweep_cmd->add_flag("--reproducible", sweep_args.reproducible,
+                        "Reports with a fixed date and no timings (byte-identical reruns)");
     sweep_cmd->add_flag("-q,--quiet", sweep_args.quiet, "No progress and no summary");
     sweep_cmd->footer(
         "Exit codes: 0 written (whether variants pass or not), 2 bad input or no variant could "
-        "be built,\n130 interrupted: the completed rows are in sweep-interrupted.csv.\n"
+        "be built,\n3 an output could not be written (with --reports: some variant's files; "
+        "the rest is written),\n130 interrupted: the completed rows are in "
+        "sweep-interrupted.csv.\n"
         "Example: lapwing sweep G3.toml --vary t=8:30:2 --find-min t -o G3-sweep");
 
     std::vector<std::string> merge_files;

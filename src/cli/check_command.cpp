@@ -1,29 +1,22 @@
 // `lapwing check FILE [-o DIR]`: the whole pipeline, then the report stage's
-// outputs written to DIR (each through a temporary file and a rename), and
-// the terminal summary (or its JSON form). The renderers live in
-// src/report/; this file only touches the disk, the clock and the terminal.
+// outputs written to DIR (check_outputs.cpp: each through a temporary file
+// and a rename), and the terminal summary (or its JSON form).
 #include "check/pipeline.hpp"
+#include "cli/check_outputs.hpp"
 #include "cli/commands.hpp"
 #include "cli/files.hpp"
 #include "core/error.hpp"
 #include "input/load_connection.hpp"
-#include "report/figures.hpp"
-#include "report/output_folder.hpp"
-#include "report/outputs.hpp"
 #include "report/progress_line.hpp"
-#include "report/sha256.hpp"
 #include "report/terminal_summary.hpp"
 
-#include <algorithm>
 #include <chrono>
 #include <condition_variable>
-#include <ctime>
 #include <filesystem>
 #include <fmt/format.h>
 #include <iostream>
 #include <mutex>
 #include <ostream>
-#include <stdexcept>
 #include <sys/ioctl.h>
 #include <thread>
 #include <unistd.h>
@@ -89,42 +82,6 @@ private:
     std::jthread thread_; // started in the constructor's body, after every member above
 };
 
-std::string utc_now() {
-    const std::time_t now = std::time(nullptr);
-    std::tm tm{};
-    gmtime_r(&now, &tm);
-    char text[32];
-    std::strftime(text, sizeof text, "%Y-%m-%d %H:%M:%S UTC", &tm);
-    return text;
-}
-
-// Creates the folder, or checks that an existing one may be written into.
-// Each refusal is an output failure (exit code 3, as for `lapwing mesh`),
-// raised before any work is done.
-void prepare_folder(const fs::path& folder, bool force) {
-    std::error_code ec;
-    if (!fs::exists(folder, ec)) {
-        fs::create_directories(folder, ec);
-        if (ec)
-            throw OutputError("cannot create output folder " + folder.string() + ": " +
-                              ec.message());
-        return;
-    }
-    if (!fs::is_directory(folder, ec))
-        throw OutputError("output folder " + folder.string() + " exists and is not a folder");
-    std::vector<std::string> entries;
-    for (const auto& entry : fs::directory_iterator(folder, ec))
-        entries.push_back(entry.path().filename().string());
-    std::sort(entries.begin(), entries.end());
-    if (auto refusal = report::refuse_folder(folder.string(), entries, force))
-        throw OutputError(*refusal);
-}
-
-bool wants(const model::Connection& c, const char* format) {
-    return std::find(c.report.formats.begin(), c.report.formats.end(), format) !=
-           c.report.formats.end();
-}
-
 } // namespace
 
 int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err) {
@@ -147,28 +104,9 @@ int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err) {
         summary.colour = is_terminal(out);
         if (writing) {
             progress.stage("writing the calc sheet and data files");
-            report::RunInfo run;
-            run.version = LAPWING_VERSION;
-            run.build_id = LAPWING_BUILD_ID;
-            run.command_line = args.command_line;
-            run.input_file = args.file;
-            run.input_sha256 = report::sha256_hex(text);
-            run.resolved_model = input::write_resolved(c);
-            run.resolved_sha256 = report::sha256_hex(run.resolved_model);
-            run.reproducible = args.reproducible;
-            run.date = args.reproducible ? report::reproducible_date : utc_now();
-            run.two_mesh = options.two_mesh;
-
-            const std::vector<report::Figure> figures = report::all_figures(o);
-            const auto put = [&](const std::string& name, const std::string& content) {
-                write_atomically(folder / name, content);
-                summary.files.push_back(name);
-            };
-            if (wants(c, "html")) put("report.html", report::calc_sheet_html(o, run, figures));
-            if (wants(c, "json")) put("results.json", report::results_json(o, run, figures));
-            if (wants(c, "vtu")) put("model.vtu", report::model_vtu(o));
-            if (c.report.figures)
-                for (const report::Figure& f : figures) put(f.file, f.svg);
+            const report::RunInfo run = make_run_info(args.file, text, c, args.command_line,
+                                                      args.reproducible, options.two_mesh);
+            summary.files = write_check_outputs(folder, c, o, run);
             summary.folder = folder.string();
         }
         progress.done();

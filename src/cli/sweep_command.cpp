@@ -2,6 +2,12 @@
 // progress line, then sweep.csv and sweep.html written atomically; and
 // `lapwing merge`, which joins shard CSVs.
 //
+// --reports: each built variant's files, exactly as `lapwing check -o` writes
+// them (check_outputs.cpp), in DIR/variants/NAME/, written on the worker
+// thread as the variant finishes. A variant whose files cannot be written
+// is noted in sweep.csv's report column; the sweep goes on, and ends with
+// exit code 3.
+//
 // Interrupt (SIGINT): no new variant starts, the running ones finish, and
 // the completed rows are written, in variant order, to
 // sweep-interrupted.csv (temporary file, then rename); sweep.csv and
@@ -9,6 +15,7 @@
 // A second SIGINT ends the program at once (nothing half-written either).
 #include "cli/sweep_command.hpp"
 
+#include "cli/check_outputs.hpp"
 #include "cli/commands.hpp"
 #include "cli/files.hpp"
 #include "core/error.hpp"
@@ -20,6 +27,7 @@
 #include "sweep/progress.hpp"
 #include "sweep/runner.hpp"
 
+#include <algorithm>
 #include <atomic>
 #include <chrono>
 #include <csignal>
@@ -62,10 +70,22 @@ struct InterruptGuard {
 };
 
 std::string csv_text(const std::vector<sweep::Axis>& axes,
-                     const std::map<int, std::pair<sweep::Variant, sweep::VariantResult>>& rows) {
-    std::string text = sweep::csv_header(axes);
-    for (const auto& [index, row] : rows) text += sweep::csv_row(axes, row.first, row.second);
+                     const std::map<int, std::pair<sweep::Variant, sweep::VariantResult>>& rows,
+                     bool with_reports) {
+    std::string text = sweep::csv_header(axes, with_reports);
+    for (const auto& [index, row] : rows)
+        text += sweep::csv_row(axes, row.first, row.second, with_reports);
     return text;
+}
+
+// The calc sheet records how it was made: the sweep's command line as typed
+// and which variant this is, so the sheet of a variant never claims to come
+// from a `lapwing check` that was not run.
+std::string variant_command_line(const std::string& sweep_command, const sweep::Variant& v,
+                                 size_t grid_size) {
+    std::string sets;
+    for (const std::string& s : v.sets) sets += " --set " + s;
+    return fmt::format("{} [variant {} of {}:{}]", sweep_command, v.index + 1, grid_size, sets);
 }
 
 } // namespace
@@ -87,11 +107,24 @@ int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
         const int search_axis = args.find_min.empty() ? -1 : sweep::axis_index(axes, args.find_min);
         std::vector<sweep::Variant> variants = grid;
         if (!args.shard.empty()) {
+            // The search picks each round's variants from the last round's
+            // ratios, so it cannot be dealt out by variant number; and one
+            // line of a thickness search is a handful of runs, not worth
+            // spreading. What is worth spreading is the other axes.
             if (search_axis >= 0)
-                throw InputError(Diagnostic{"", 0, 0, "--shard",
-                                            "cannot be combined with --find-min (the search "
-                                            "picks its variants as it goes); shard the full grid",
-                                            ""});
+                throw InputError(Diagnostic{
+                    "", 0, 0, "--shard",
+                    fmt::format(
+                        "cannot be combined with --find-min: the search chooses its next "
+                        "variants from the ratios found so far, so it cannot be split by "
+                        "variant number. To spread it over machines, give each job its own "
+                        "values of the other keys and the whole range of {0} (job 1: --vary "
+                        "pitch=70 --vary {0}=..., job 2: --vary pitch=75 ...), each into its own "
+                        "-o folder; or run the full grid with --shard I/N and no --find-min, "
+                        "join the parts with lapwing merge, and read the smallest passing {0} "
+                        "from sweep.csv (see docs/sweep.md)",
+                        args.find_min),
+                    ""});
             variants = sweep::shard_of(grid, sweep::parse_shard(args.shard));
         }
         if (std::error_code ec; !fs::is_directory(args.output_folder, ec))
@@ -103,6 +136,25 @@ int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
         options.two_mesh = !args.single_mesh;
         options.reuse = !args.no_reuse;
         options.stop = &interrupted;
+        const fs::path folder(args.output_folder);
+        if (args.reports) {
+            std::error_code ec;
+            fs::create_directories(folder / "variants", ec);
+            if (ec || !fs::is_directory(folder / "variants", ec))
+                throw OutputError("cannot make the folder " + (folder / "variants").string() +
+                                  (ec ? ": " + ec.message() : ": a file of that name is there"));
+            options.on_outcome = [&](const sweep::Variant& v, const check::CheckOutcome& o) {
+                const std::string name = sweep::variant_folder_name(axes, v, grid.size());
+                const fs::path into = folder / "variants" / name;
+                prepare_folder(into, false);
+                const report::RunInfo run =
+                    make_run_info(args.file, text, o.connection,
+                                  variant_command_line(args.command_line, v, grid.size()),
+                                  args.reproducible, options.two_mesh);
+                write_check_outputs(into, o.connection, o, run);
+                return (fs::path("variants") / name).generic_string();
+            };
+        }
         const bool terminal = ::isatty(STDERR_FILENO) == 1;
         int n_done = 0, n_failed = 0, n_total = static_cast<int>(variants.size());
         sweep::Progress progress(n_total, terminal);
@@ -139,10 +191,9 @@ int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
         }
         if (!args.quiet) err << progress.finish();
 
-        const fs::path folder(args.output_folder);
         if (interrupted) {
             const fs::path partial = folder / "sweep-interrupted.csv";
-            write_atomically(partial, csv_text(axes, rows));
+            write_atomically(partial, csv_text(axes, rows, args.reports));
             err << fmt::format("lapwing sweep: interrupted after {} of {} variants; their rows "
                                "are in {}; sweep.csv and sweep.html were not written\n",
                                rows.size(), n_total, partial.string());
@@ -164,7 +215,8 @@ int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
             page.results.push_back(r);
         }
         page.find_min = found;
-        write_atomically(folder / "sweep.csv", csv_text(axes, rows));
+        page.reports = args.reports;
+        write_atomically(folder / "sweep.csv", csv_text(axes, rows, args.reports));
         write_atomically(folder / "sweep.html", sweep::render_sweep_html(page));
 
         int n_built = 0, n_pass = 0;
@@ -194,12 +246,24 @@ int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
                                reuse.meshes_reused, reuse.meshes_reused + reuse.meshes_built,
                                reuse.solvers_reused, reuse.solvers_reused + reuse.solvers_built,
                                (folder / "sweep.csv").string(), (folder / "sweep.html").string());
+        int n_unwritten = 0;
+        for (const auto& r : results) n_unwritten += !r.report_error.empty();
+        if (args.reports && !args.quiet)
+            out << fmt::format("wrote the files of {} variants under {}\n", n_built - n_unwritten,
+                               (folder / "variants").string());
+        if (n_unwritten > 0) {
+            const auto first = std::find_if(results.begin(), results.end(),
+                                            [](const auto& r) { return !r.report_error.empty(); });
+            err << fmt::format("error: the files of {} variant{} could not be written (the report "
+                               "column of sweep.csv says which); the first: {}\n",
+                               n_unwritten, n_unwritten == 1 ? "" : "s", first->report_error);
+        }
         if (n_built == 0 && !results.empty()) {
             err << "error: no variant could be built; the first says: " << results.front().error
                 << "\n";
             return static_cast<int>(ExitCode::bad_input);
         }
-        return 0;
+        return n_unwritten > 0 ? static_cast<int>(ExitCode::output_failed) : 0;
     } catch (...) {
         return report_failure(err);
     }

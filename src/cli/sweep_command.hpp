@@ -18,11 +18,15 @@ struct SweepArgs {
     std::string shard;               // "I/N", empty: the whole grid
     bool single_mesh = false;        // no convergence mesh per variant
     bool no_reuse = false;           // mesh and factorize every variant afresh
+    bool reports = false;            // each variant's calc sheet in DIR/variants/NAME/
+    bool reproducible = false;       // reports with a fixed date and no timings
     bool quiet = false;
     std::string command_line;
 };
 // Exit codes: 0 the sweep was written, 2 bad input or no variant could be
-// built, 130 interrupted (the completed rows in sweep-interrupted.csv).
+// built, 3 an output could not be written (sweep.csv, sweep.html, or with
+// --reports the files of some variant: the others and the sweep are still
+// written), 130 interrupted (the completed rows in sweep-interrupted.csv).
 int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err);
 
 // `lapwing merge SHARD.csv... [-o FILE] [--expect N]`: one sweep.csv from shard files.

@@ -36,15 +36,16 @@ std::string csv_field(std::string_view text) {
     return out + "\"";
 }
 
-std::string csv_header(const std::vector<Axis>& axes) {
+std::string csv_header(const std::vector<Axis>& axes, bool with_reports) {
     std::string out = "variant";
     for (const Axis& a : axes) out += "," + csv_field(a.name);
     out += ",built,passes,governing_ratio,governing_check,governing_family";
     for (check::Family f : check::all_families) out += std::string(",") + check::word(f);
-    return out + ",error\n";
+    return out + (with_reports ? ",error,report\n" : ",error\n");
 }
 
-std::string csv_row(const std::vector<Axis>& axes, const Variant& v, const VariantResult& r) {
+std::string csv_row(const std::vector<Axis>& axes, const Variant& v, const VariantResult& r,
+                    bool with_reports) {
     std::string out = std::to_string(v.index + 1);
     for (size_t k = 0; k < axes.size(); ++k)
         out += "," + csv_field(axes[k].texts[static_cast<size_t>(v.at[k])]);
@@ -56,7 +57,11 @@ std::string csv_row(const std::vector<Axis>& axes, const Variant& v, const Varia
     else
         out += ",,,";
     for (const auto& ratio : r.family_ratio) out += "," + (ratio ? ratio_text(*ratio) : "");
-    return out + "," + csv_field(r.error) + "\n";
+    out += "," + csv_field(r.error);
+    if (with_reports)
+        out +=
+            "," + csv_field(r.report_error.empty() ? r.report : "not written: " + r.report_error);
+    return out + "\n";
 }
 
 CsvTable parse_sweep_csv(std::string_view text, std::string_view name) {

@@ -1,6 +1,8 @@
 // sweep.csv: one row per variant (RFC 4180 quoting), in variant order:
 //   variant, each varied key, built, passes, governing_ratio, governing_check,
-//   governing_family, one ratio column per check family, error
+//   governing_family, one ratio column per check family, error, and with
+//   --reports a last column `report`: the variant's folder (relative to the
+//   sweep's), "not written: WHY" when its files failed, empty when not built
 // Ratios are written in the shortest form that reads back to the same
 // double, so a merged sweep is byte-identical to a sweep run in one piece.
 // `lapwing merge` joins shard files by the variant column.
@@ -15,10 +17,10 @@
 
 namespace lapwing::sweep {
 
-std::string csv_header(const std::vector<Axis>& axes);
+std::string csv_header(const std::vector<Axis>& axes, bool with_reports = false);
 // `values` are written with the axis texts, so 12 stays "12", not "12.0".
 std::string csv_row(const std::vector<Axis>& axes, const Variant& variant,
-                    const VariantResult& result);
+                    const VariantResult& result, bool with_reports = false);
 
 struct CsvTable {
     std::string header;                            // the header line, without its line end

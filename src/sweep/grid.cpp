@@ -4,6 +4,7 @@
 #include "core/error.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <charconv>
 #include <cmath>
 #include <fmt/format.h>
@@ -168,6 +169,25 @@ std::vector<Variant> shard_of(const std::vector<Variant>& grid, Shard shard) {
     std::vector<Variant> out;
     for (const Variant& v : grid)
         if (v.index % shard.of == shard.part - 1) out.push_back(v);
+    return out;
+}
+
+std::string variant_folder_name(const std::vector<Axis>& axes, const Variant& variant,
+                                size_t grid_size) {
+    const auto safe = [](std::string_view text) {
+        std::string out(text);
+        for (char& ch : out)
+            if (!std::isalnum(static_cast<unsigned char>(ch)) && ch != '.' && ch != '+' &&
+                ch != '-')
+                ch = '_';
+        return out;
+    };
+    const size_t width = std::to_string(std::max<size_t>(grid_size, 1)).size();
+    std::string number = std::to_string(variant.index + 1);
+    std::string out = std::string(width > number.size() ? width - number.size() : 0, '0') + number;
+    for (size_t k = 0; k < axes.size(); ++k)
+        out += "_" + safe(axes[k].name) + "-" +
+               safe(axes[k].texts[static_cast<size_t>(variant.at[k])]);
     return out;
 }
 

@@ -33,6 +33,15 @@ struct Variant {
 // set the same key or the grid exceeds max_values variants.
 std::vector<Variant> make_grid(const std::vector<Axis>& axes);
 
+// The folder name of a variant's calc sheet (--reports), from its number and
+// values: "07_t-20" or "12_t-12.5_pitch-70", the number zero-padded to the
+// width of the grid's size so names sort in variant order. Only letters,
+// digits, '.', '+' and '-' are kept from names and values (others become
+// '_'), so the name is safe on every common file system; the number makes
+// it unique even when two keys differ only in such characters.
+std::string variant_folder_name(const std::vector<Axis>& axes, const Variant& variant,
+                                size_t grid_size);
+
 // `--shard I/N` (1 ≤ I ≤ N): the variants whose index ≡ I−1 (mod N).
 struct Shard {
     int part = 1, of = 1;

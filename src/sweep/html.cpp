@@ -215,7 +215,7 @@ std::string render_sweep_html(const SweepPage& page) {
     out += "<th>passes</th><th>governing ratio</th><th>governing check</th>";
     for (check::Family f : check::all_families)
         out += std::string("<th>") + check::word(f) + "</th>";
-    out += "<th>error</th></tr>\n";
+    out += page.reports ? "<th>error</th><th>files</th></tr>\n" : "<th>error</th></tr>\n";
     for (size_t i = 0; i < page.results.size(); ++i) {
         const VariantResult& r = page.results[i];
         const Variant& v = page.variants[i];
@@ -229,7 +229,19 @@ std::string render_sweep_html(const SweepPage& page) {
                                       : "<td></td><td></td>";
         for (const auto& ratio : r.family_ratio)
             out += ratio ? fmt::format("<td>{:.3f}</td>", *ratio) : "<td></td>";
-        out += "<td style=\"text-align:left\">" + escape(r.error) + "</td></tr>\n";
+        out += "<td style=\"text-align:left\">" + escape(r.error) + "</td>";
+        if (page.reports) {
+            // Relative links, so the sweep folder can be moved or zipped whole.
+            if (!r.report_error.empty())
+                out += "<td style=\"text-align:left\">not written: " + escape(r.report_error) +
+                       "</td>";
+            else if (!r.report.empty())
+                out += "<td style=\"text-align:left\"><a href=\"" + escape(r.report) + "/\">" +
+                       escape(r.report) + "</a></td>";
+            else
+                out += "<td></td>";
+        }
+        out += "</tr>\n";
     }
     return out + "</table>\n</body></html>\n";
 }

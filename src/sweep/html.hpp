@@ -22,6 +22,7 @@ struct SweepPage {
     std::vector<VariantResult> results; // same order as variants
     int plot_axis = 0;                  // the x axis of the charts
     std::optional<FindMinResult> find_min;
+    bool reports = false; // --reports: a column linking each variant's folder
 };
 
 std::string render_sweep_html(const SweepPage& page);

@@ -85,7 +85,13 @@ VariantResult Runner::run_one(const Variant& variant, check::ReuseCache* cache) 
         const check::CheckOutcome outcome = check::check_connection(c, options);
         out.built = true;
         summarise(outcome.table, out);
-        if (options_.on_outcome) options_.on_outcome(variant, outcome);
+        if (options_.on_outcome) {
+            try {
+                out.report = flatten(options_.on_outcome(variant, outcome));
+            } catch (const std::exception& e) {
+                out.report_error = flatten(e.what());
+            }
+        }
     } catch (const InputError& e) {
         out.error = flatten("bad input: " + one_line(e));
     } catch (const AnalysisError& e) {

@@ -36,6 +36,9 @@ struct VariantResult {
     // Highest ratio per family (all_families order); nullopt: no row with a capacity.
     std::array<std::optional<double>, n_families> family_ratio{};
     double seconds = 0; // wall time of this variant (not written to the CSV)
+    // With on_outcome (--reports): what it returned (the variant's folder),
+    // or the message of what it threw (why the files could not be written).
+    std::string report, report_error;
 };
 
 struct RunOptions {
@@ -47,8 +50,10 @@ struct RunOptions {
     // Called on the calling thread, in completion order, as variants finish.
     std::function<void(const VariantResult&)> on_done;
     // Called on the worker thread with the full outcome of a built variant
-    // (the calc sheet of each variant); must be thread-safe.
-    std::function<void(const Variant&, const check::CheckOutcome&)> on_outcome;
+    // (to write each variant's calc sheet); must be thread-safe. Its return
+    // value goes to VariantResult::report; an exception it throws is caught
+    // into report_error, and the variant still counts as built.
+    std::function<std::string(const Variant&, const check::CheckOutcome&)> on_outcome;
 };
 
 class Runner {

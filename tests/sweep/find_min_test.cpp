@@ -2,7 +2,8 @@
 // the full grid, found by running every variant. On the lap-splice template
 // the brute force runs once and the search reads its results (the pipeline
 // is deterministic, as the runner tests show), so the search is checked
-// without paying for its runs twice. The non-monotone case is constructed:
+// without paying for its runs twice; on the web-splice template the search
+// runs its own variants through a runner. The non-monotone case is constructed:
 // a ratio that dips below 1 at a thin plate, rises, then falls again, so
 // bisection alone would miss the first passing value.
 #include "core/error.hpp"
@@ -73,6 +74,36 @@ TEST_CASE("find-min equals the brute-force grid answer on the lap-splice templat
     CHECK(found.lines[0].warning.empty());
     // Both ends, then ⌈log2(6)⌉ = 3 midpoints at most.
     CHECK(evaluate.n_variants <= 5);
+}
+
+TEST_CASE("find-min through the runner equals the brute-force answer on the web-splice template") {
+    // The search runs its own variants here (through a runner with the reuse
+    // cache, as `lapwing sweep --find-min` does); the brute force is every
+    // variant of the grid run afresh, without a cache.
+    const std::string text = test::read_template("web-splice.toml");
+    const std::vector<std::string> coarse = {"mesh.size=30", "mesh.near_hole_size=10"};
+    const std::vector<Axis> axes = {parse_axis("t=4:16:2")}; // 7 values
+    const auto grid = make_grid(axes);
+    RunOptions fresh;
+    fresh.threads = 2;
+    fresh.two_mesh = false;
+    fresh.reuse = false;
+    const auto all = Runner(text, "web-splice.toml", coarse, fresh).run(grid);
+    const auto expected = brute_force(all, 0);
+    REQUIRE(expected.has_value());
+    CHECK(*expected > axes[0].values.front()); // inside the grid: bisection has work to do
+    RunOptions cached = fresh;
+    cached.reuse = true;
+    Runner runner(text, "web-splice.toml", coarse, cached);
+    int n_run = 0;
+    const FindMinResult found = find_min(axes, grid, 0, [&](std::span<const Variant> batch) {
+        n_run += static_cast<int>(batch.size());
+        return runner.run(batch);
+    });
+    REQUIRE(found.lines.size() == 1);
+    CHECK(found.lines[0].smallest == expected);
+    CHECK(found.lines[0].warning.empty());
+    CHECK(n_run < static_cast<int>(grid.size())); // fewer runs than the brute force
 }
 
 TEST_CASE("find-min per line of a two-key grid, monotone ratios") {
