@@ -1,6 +1,7 @@
 // The sweep summary page.
 #include "sweep/html.hpp"
 
+#include "report/text_format.hpp"
 #include "sweep/csv.hpp"
 
 #include <algorithm>
@@ -16,26 +17,7 @@ namespace {
 constexpr const char* family_colour[] = {"#E69F00", "#56B4E9", "#009E73", "#F0E442",
                                          "#0072B2", "#D55E00", "#CC79A7", "#999999"};
 
-std::string escape(std::string_view s) {
-    std::string out;
-    for (char ch : s) switch (ch) {
-        case '&':
-            out += "&amp;";
-            break;
-        case '<':
-            out += "&lt;";
-            break;
-        case '>':
-            out += "&gt;";
-            break;
-        case '"':
-            out += "&quot;";
-            break;
-        default:
-            out += ch;
-        }
-    return out;
-}
+using report::escape; // the calc sheet's escaping, one rule for every page
 
 struct Frame {
     double x0, x1, y1; // data ranges (y from 0)
