@@ -19,6 +19,7 @@ struct SweepArgs {
     bool single_mesh = false;        // no convergence mesh per variant
     bool no_reuse = false;           // mesh and factorize every variant afresh
     bool quiet = false;
+    long max_dofs = 5'000'000; // analysis::default_max_dofs, for every variant's meshes
     std::string command_line;
 };
 // Exit codes: 0 the sweep was written, 2 bad input or no variant could be
