@@ -156,14 +156,15 @@ ResourceEstimate estimate_resources(const model::Connection& c,
                               static_cast<int>(std::min(extra, 1'000'000'000L)));
 }
 
-void check_resources(const ResourceEstimate& e, const mesh::MeshSettings& settings, long max_dofs) {
+void check_resources(const ResourceEstimate& e, const mesh::MeshSettings& settings, long max_dofs,
+                     std::string_view subject) {
     if (e.dofs <= static_cast<double>(max_dofs)) return;
     throw ResourceLimitError(fmt::format(
-        "the model is too large: about {:.3g} dofs ({:.3g} {} elements at element size {:.3g} mm, "
+        "{} is too large: about {:.3g} dofs ({:.3g} {} elements at element size {:.3g} mm, "
         "about {:.3g} GiB of memory), above the limit of {} dofs. Use a larger mesh.size or a "
         "smaller mesh.around_hole, or raise the limit with --max-dofs N if this machine has the "
         "memory (about {:.2g} kB per dof)",
-        e.dofs, e.elements, fe::name(settings.kind), e.element_size,
+        subject, e.dofs, e.elements, fe::name(settings.kind), e.element_size,
         e.bytes / (1024.0 * 1024 * 1024), max_dofs, bytes_per_dof / 1000));
 }
 

@@ -9,6 +9,7 @@
 #include "model/connection.hpp"
 
 #include <string>
+#include <string_view>
 
 namespace lapwing::analysis {
 
@@ -56,8 +57,8 @@ public:
 
 // Throws ResourceLimitError when the estimate exceeds `max_dofs`, naming the
 // estimate, the limit and what to change (mesh.size, mesh.around_hole,
-// --max-dofs).
+// --max-dofs). `subject` starts the message ("the model is too large: …").
 void check_resources(const ResourceEstimate& estimate, const mesh::MeshSettings& settings,
-                     long max_dofs = default_max_dofs);
+                     long max_dofs = default_max_dofs, std::string_view subject = "the model");
 
 } // namespace lapwing::analysis

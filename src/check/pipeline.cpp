@@ -86,7 +86,28 @@ void compare(const Evaluation& coarse, const Evaluation& fine, Convergence& out)
 
 } // namespace
 
+mesh::MeshSettings fine_mesh_settings(const geometry::PlateRegion& region,
+                                      const mesh::MeshSettings& settings) {
+    mesh::MeshSettings fine = settings;
+    fine.element_size = 0.5 * mesh::detail::element_size(region, settings);
+    fine.elements_around_hole = 2 * mesh::detail::elements_around_hole(settings);
+    return fine;
+}
+
+void check_resources(const model::Connection& c, bool two_mesh, long max_dofs) {
+    const mesh::MeshSettings settings = analysis::mesh_settings(c);
+    analysis::check_resources(analysis::estimate_resources(c, settings), settings, max_dofs);
+    if (!two_mesh) return;
+    const mesh::MeshSettings fine = fine_mesh_settings(analysis::plate_layout(c).region, settings);
+    // The model's own mesh fits: the message names the second one and the
+    // quickest way out.
+    analysis::check_resources(analysis::estimate_resources(c, fine), fine, max_dofs,
+                              "the convergence mesh (half the element size, solved after the "
+                              "model's own mesh; --single-mesh skips it)");
+}
+
 CheckOutcome check_connection(const model::Connection& c, const CheckOptions& options) {
+    check_resources(c, options.two_mesh, options.max_dofs);
     CheckOutcome out;
     out.connection = c;
     const auto start = std::chrono::steady_clock::now();
@@ -108,10 +129,8 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
         // Globally refined rather than only near the governing regions: simpler
         // to state, and every row gets its evidence (the cost is about four
         // times the model's own solve).
-        mesh::MeshSettings fine_settings = e.settings;
-        fine_settings.element_size = 0.5 * e.element_size;
-        fine_settings.elements_around_hole = 2 * mesh::detail::elements_around_hole(e.settings);
         stage(Stage::convergence);
+        const mesh::MeshSettings fine_settings = fine_mesh_settings(e.layout.region, e.settings);
         const Evaluation f = evaluate(c, fine_settings, options.cache);
         stage(Stage::comparison);
         Convergence& cv = out.convergence;

@@ -5,6 +5,7 @@
 #pragma once
 
 #include "analysis/plate_region.hpp"
+#include "analysis/resource_estimate.hpp"
 #include "analysis/results.hpp"
 #include "check/check_table.hpp"
 #include "check/section.hpp"
@@ -44,6 +45,9 @@ struct CheckOptions {
     // itself prints nothing; cli/ turns these into the terminal's progress
     // line.
     std::function<void(Stage)> on_stage;
+    // Refuse, before meshing, a model whose mesh (or, with two_mesh, whose
+    // finer convergence mesh) is estimated above this many dofs.
+    long max_dofs = analysis::default_max_dofs;
 };
 
 // The highest local stresses of one load case, from the recovered nodal and
@@ -115,8 +119,20 @@ struct CheckOutcome {
     Timings seconds;
 };
 
+// The convergence mesh's settings: half the element size the model's mesh
+// uses everywhere, twice the elements round each hole.
+mesh::MeshSettings fine_mesh_settings(const geometry::PlateRegion& region,
+                                      const mesh::MeshSettings& settings);
+
+// The resource guard of a check, before anything is meshed: the model's
+// mesh and, when `two_mesh`, the finer convergence mesh (about four times
+// the dofs) against `max_dofs`. Throws analysis::ResourceLimitError naming
+// the mesh, the estimate and what to change (--single-mesh for the second).
+void check_resources(const model::Connection& connection, bool two_mesh, long max_dofs);
+
 // Throws InputError for connection data that cannot be modelled and
-// AnalysisError for a model that cannot be solved.
+// AnalysisError for a model that cannot be solved or one above
+// options.max_dofs (checked before meshing).
 CheckOutcome check_connection(const model::Connection& connection, const CheckOptions& options);
 
 } // namespace lapwing::check

@@ -19,14 +19,15 @@ namespace lapwing::cli {
 namespace {
 
 // --max-dofs for every command that meshes: one wording, one default.
-void add_max_dofs_option(CLI::App* command, long& max_dofs) {
+void add_max_dofs_option(CLI::App* command, long& max_dofs, long highest = 2'000'000'000L,
+                         const std::string& note = "") {
     command
         ->add_option("--max-dofs", max_dofs,
                      "Refuse a model estimated above N degrees of freedom before meshing "
                      "(default " +
                          std::to_string(analysis::default_max_dofs) +
-                         ", what fits a 24 GiB machine; about 2.5 kB of memory per dof)")
-        ->check(CLI::Range(1L, 2'000'000'000L));
+                         ", what fits a 24 GiB machine; about 2.5 kB of memory per dof)" + note)
+        ->check(CLI::Range(1L, highest));
 }
 
 std::string kinds_list() {
@@ -129,6 +130,8 @@ int run(int argc, char** argv) {
                         "Fixed date in the outputs, so two runs give byte-identical files");
     check_cmd->add_flag("--force", check_args.force,
                         "Write into an output folder that holds files other than lapwing's");
+    check_args.max_dofs = analysis::default_max_dofs;
+    add_max_dofs_option(check_cmd, check_args.max_dofs);
     check_cmd->footer(
         "Exit codes: 0 every check passes, 1 a demand exceeds its capacity, 2 bad input or a\n"
         "model that cannot be solved, 3 an output could not be written (the folder cannot be\n"
@@ -170,6 +173,8 @@ int run(int argc, char** argv) {
     sweep_cmd->add_flag("--reproducible", sweep_args.reproducible,
                         "Reports with a fixed date and no timings (byte-identical reruns)");
     sweep_cmd->add_flag("-q,--quiet", sweep_args.quiet, "No progress and no summary");
+    sweep_args.max_dofs = analysis::default_max_dofs;
+    add_max_dofs_option(sweep_cmd, sweep_args.max_dofs);
     sweep_cmd->footer(
         "Exit codes: 0 written (whether variants pass or not), 2 bad input or no variant could "
         "be built,\n3 an output could not be written (with --reports: some variant's files; "

@@ -88,12 +88,15 @@ int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err) {
     try {
         const std::string text = read_input_file(args.file);
         const auto c = input::load_connection(text, args.file, args.sets);
+        // Before anything is meshed or made on disk (the pipeline checks again).
+        check::check_resources(c, !args.single_mesh, args.max_dofs);
         const bool writing = !args.output_folder.empty();
         const fs::path folder(args.output_folder);
         if (writing) prepare_folder(folder, args.force);
 
         check::CheckOptions options;
         options.two_mesh = !args.single_mesh;
+        options.max_dofs = args.max_dofs;
         const bool show_progress = !args.quiet && !args.json && is_terminal(out);
         Progress progress(show_progress);
         options.on_stage = [&](check::Stage s) { progress.stage(check::words(s)); };

@@ -51,6 +51,7 @@ struct CheckArgs {
     bool json = false;         // the summary as JSON on standard output
     bool reproducible = false; // fixed date in outputs: two runs give identical files
     bool force = false;        // reuse an output folder that holds other files
+    long max_dofs = 5'000'000; // analysis::default_max_dofs; refused before meshing (exit 2)
     std::string command_line;  // as typed, for the calc sheet's traceability
 };
 int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err);

@@ -16,6 +16,7 @@
 #include "cli/sweep_command.hpp"
 
 #include "cli/check_outputs.hpp"
+#include "check/pipeline.hpp"
 #include "cli/commands.hpp"
 #include "cli/files.hpp"
 #include "core/error.hpp"
@@ -34,6 +35,7 @@
 #include <filesystem>
 #include <fmt/format.h>
 #include <map>
+#include <optional>
 #include <ostream>
 #include <unistd.h>
 
@@ -88,6 +90,31 @@ std::string variant_command_line(const std::string& sweep_command, const sweep::
     return fmt::format("{} [variant {} of {}:{}]", sweep_command, v.index + 1, grid_size, sets);
 }
 
+// The resource guard of `lapwing check` for every variant, before any is
+// meshed: one too large refuses the whole sweep, naming it. A variant that
+// does not load is left to the run, which records why.
+void check_variant_resources(const std::string& text, const SweepArgs& args,
+                             const std::vector<sweep::Variant>& variants) {
+    for (const sweep::Variant& v : variants) {
+        std::vector<std::string> sets = args.sets;
+        sets.insert(sets.end(), v.sets.begin(), v.sets.end());
+        std::optional<model::Connection> c;
+        try {
+            c = input::load_connection(text, args.file, sets);
+        } catch (const InputError&) {
+            continue;
+        }
+        try {
+            check::check_resources(*c, !args.single_mesh, args.max_dofs);
+        } catch (const analysis::ResourceLimitError& e) {
+            std::string which;
+            for (const std::string& s : v.sets) which += (which.empty() ? "" : ", ") + s;
+            throw analysis::ResourceLimitError(
+                fmt::format("variant {} ({}): {}", v.index + 1, which, e.what()));
+        }
+    }
+}
+
 } // namespace
 
 int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
@@ -130,10 +157,12 @@ int run_sweep(const SweepArgs& args, std::ostream& out, std::ostream& err) {
         if (std::error_code ec; !fs::is_directory(args.output_folder, ec))
             throw InputError(
                 Diagnostic{"", 0, 0, "-o", args.output_folder + ": there is no such folder", ""});
+        check_variant_resources(text, args, search_axis >= 0 ? grid : variants);
 
         sweep::RunOptions options;
         options.threads = args.threads > 0 ? args.threads : sweep::default_threads();
         options.two_mesh = !args.single_mesh;
+        options.max_dofs = args.max_dofs;
         options.reuse = !args.no_reuse;
         options.stop = &interrupted;
         const fs::path folder(args.output_folder);

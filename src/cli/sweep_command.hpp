@@ -21,6 +21,7 @@ struct SweepArgs {
     bool reports = false;            // each variant's calc sheet in DIR/variants/NAME/
     bool reproducible = false;       // reports with a fixed date and no timings
     bool quiet = false;
+    long max_dofs = 5'000'000; // analysis::default_max_dofs, for every variant's meshes
     std::string command_line;
 };
 // Exit codes: 0 the sweep was written, 2 bad input or no variant could be

@@ -81,6 +81,7 @@ VariantResult Runner::run_one(const Variant& variant, check::ReuseCache* cache) 
         const model::Connection c = input::load_connection(text_, file_, sets);
         check::CheckOptions options;
         options.two_mesh = options_.two_mesh;
+        options.max_dofs = options_.max_dofs;
         options.cache = cache;
         const check::CheckOutcome outcome = check::check_connection(c, options);
         out.built = true;

@@ -45,6 +45,7 @@ struct RunOptions {
     int threads = 1;
     bool two_mesh = true; // the convergence mesh, as in `lapwing check`
     bool reuse = true;    // per-worker ReuseCache
+    long max_dofs = analysis::default_max_dofs; // each variant's resource guard
     // Set from a signal handler: no new variant starts; running ones finish.
     const std::atomic<bool>* stop = nullptr;
     // Called on the calling thread, in completion order, as variants finish.

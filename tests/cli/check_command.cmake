@@ -1,8 +1,9 @@
 # Runs the lapwing executable once and checks its exit code and output.
 #   -DEXE=path -DARGS="a|b|c" -DCODE=n [-DEXPECT=text] [-DREJECT=text]
-#   [-DWORKDIR=dir] [-DCREATE=file] [-DKEEP=file]
+#   [-DWORKDIR=dir] [-DCREATE=file] [-DKEEP=file] [-DABSENT=path]
 # CREATE writes a file with known content first; KEEP checks afterwards that the
-# file still has that content (an input must never be overwritten).
+# file still has that content (an input must never be overwritten). ABSENT is
+# removed first and must not exist afterwards (a refused run makes nothing).
 cmake_minimum_required(VERSION 3.25)
 string(REPLACE "|" ";" arguments "${ARGS}")
 if(NOT WORKDIR)
@@ -12,6 +13,9 @@ file(MAKE_DIRECTORY "${WORKDIR}")
 set(sentinel "# kept as it was\n")
 if(CREATE)
   file(WRITE "${WORKDIR}/${CREATE}" "${sentinel}")
+endif()
+if(ABSENT)
+  file(REMOVE_RECURSE "${WORKDIR}/${ABSENT}")
 endif()
 execute_process(COMMAND "${EXE}" ${arguments}
   WORKING_DIRECTORY "${WORKDIR}"
@@ -37,4 +41,7 @@ if(KEEP)
   if(NOT now STREQUAL sentinel)
     message(FATAL_ERROR "${KEEP} was changed")
   endif()
+endif()
+if(ABSENT AND EXISTS "${WORKDIR}/${ABSENT}")
+  message(FATAL_ERROR "${ABSENT} was made\n--- output ---\n${all}")
 endif()
