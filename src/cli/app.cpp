@@ -190,8 +190,9 @@ int run(int argc, char** argv) {
     merge_cmd->add_option("FILES", merge_files, "Shard CSV files")->required();
     merge_cmd->add_option("-o,--output", merge_output,
                           "File to write (default: print to standard output)");
-    merge_cmd->add_option("--expect", merge_expect,
-                          "Number of variants of the full sweep, to catch a missing last shard")
+    merge_cmd
+        ->add_option("--expect", merge_expect,
+                     "Number of variants of the full sweep, to catch a missing last shard")
         ->check(CLI::Range(1, 100000));
 
 #ifdef LAPWING_HAS_VERIFY

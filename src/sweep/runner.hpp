@@ -43,8 +43,8 @@ struct VariantResult {
 
 struct RunOptions {
     int threads = 1;
-    bool two_mesh = true; // the convergence mesh, as in `lapwing check`
-    bool reuse = true;    // per-worker ReuseCache
+    bool two_mesh = true;                       // the convergence mesh, as in `lapwing check`
+    bool reuse = true;                          // per-worker ReuseCache
     long max_dofs = analysis::default_max_dofs; // each variant's resource guard
     // Set from a signal handler: no new variant starts; running ones finish.
     const std::atomic<bool>* stop = nullptr;

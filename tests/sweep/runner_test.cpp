@@ -119,6 +119,27 @@ TEST_CASE("a variant that cannot be built is recorded and the others complete") 
     CHECK(row.starts_with("1,40,no,,"));
 }
 
+TEST_CASE("each variant's pipeline uses the run's dof limit") {
+    const std::string text = test::read_template("lap-splice.toml");
+    const std::vector<Axis> axes = {parse_axis("t=10,12")};
+    const auto grid = make_grid(axes);
+    RunOptions tight = options(1);
+    tight.max_dofs = 100; // far below the coarse lap splice's few thousand dofs
+    const auto refused =
+        Runner(text, "lap-splice.toml", test::coarse_lap_splice(), tight).run(grid);
+    REQUIRE(refused.size() == 2);
+    for (const VariantResult& r : refused) {
+        CHECK_FALSE(r.built);
+        CHECK(r.error.find("too large") != std::string::npos);
+    }
+    RunOptions roomy = options(1);
+    roomy.max_dofs = 2 * analysis::default_max_dofs; // above the default is allowed
+    const auto built = Runner(text, "lap-splice.toml", test::coarse_lap_splice(), roomy).run(grid);
+    REQUIRE(built.size() == 2);
+    CHECK(built[0].built);
+    CHECK(built[1].built);
+}
+
 TEST_CASE("a stop request ends the sweep before the next variant") {
     const std::string text = test::read_template("lap-splice.toml");
     const auto grid = make_grid({parse_axis("t=10:20:2")});
