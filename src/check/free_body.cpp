@@ -37,8 +37,7 @@ void add_nodal_forces(const fe::Model& model, const Eigen::VectorXd& u,
                       const std::vector<int>& elements, const std::vector<char>& cut,
                       const Vector2d& centre, const Weight& weight, Vector2d& force,
                       double& moment) {
-    fe::ElementMatrixStorage k;
-    Eigen::Matrix<double, 18, 1> u_e;
+    Eigen::VectorXd u_e(18), f(18);
     for (const int e : elements) {
         const fe::Element& el = model.elements[static_cast<size_t>(e)];
         const int n = fe::node_count(el.kind);
@@ -47,14 +46,15 @@ void add_nodal_forces(const fe::Model& model, const Eigen::VectorXd& u,
             touches = touches || cut[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
         if (!touches) continue;
         const fe::Matrix3 D = fe::plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
-        const int n_dofs = fe::element_stiffness(model, e, D, k);
+        u_e.resize(2 * n);
+        f.resize(2 * n);
         for (int i = 0; i < n; ++i) {
             const int node = el.nodes[static_cast<size_t>(i)];
             u_e(2 * i) = u(fe::dof_ux(node));
             u_e(2 * i + 1) = u(fe::dof_uy(node));
         }
-        const Eigen::Matrix<double, 18, 1> f =
-            weight(e) * (k.topLeftCorner(n_dofs, n_dofs) * u_e.head(n_dofs));
+        fe::element_forces(model, e, D, u_e, f);
+        f *= weight(e);
         for (int i = 0; i < n; ++i) {
             const int node = el.nodes[static_cast<size_t>(i)];
             if (!cut[static_cast<size_t>(node)]) continue;
