@@ -39,13 +39,17 @@ double gap(const fe::LinkSpring& s, const Eigen::VectorXd& u) {
     return (node_u(u, s.node_b) - node_u(u, s.node_a)).dot(s.direction);
 }
 
+// `spr` holds the patch fits of the mesh, built by the first case and
+// applied to every later one.
 void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& model,
                const fe::Solution& s, const std::map<std::string, double>& factors,
-               CaseResult& out) {
+               std::optional<fe::SprRecovery>& spr, CaseResult& out) {
     out.u = s.u;
     out.dof_reactions = s.reactions;
     out.solver_residual = s.relative_residual;
-    auto nodal = fe::recover_spr(model, fe::spr_samples(model, s.u));
+    const fe::SampledStresses samples = fe::spr_samples(model, s.u);
+    if (!spr) spr.emplace(model, samples);
+    auto nodal = spr->recover(samples);
     nodal.resize(static_cast<size_t>(p.n_plate_nodes));
     out.nodal_stress = std::move(nodal);
 
@@ -197,6 +201,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         rethrow_in_connection_terms(c, p, e);
     }
     results.cases.resize(specs.size());
+    std::optional<fe::SprRecovery> spr;
     double rcond = solver->stats().factor.rcond;
     if (!p.has_contact) {
         // Linear: one factorization; combinations are factored sums.
@@ -226,7 +231,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 s.applied += factor * it->second->applied;
                 s.relative_residual = std::max(s.relative_residual, it->second->relative_residual);
             }
-            fill_case(c, p, working, s, specs[i].factors, out);
+            fill_case(c, p, working, s, specs[i].factors, spr, out);
             check_finite(out);
         }
     } else {
@@ -294,7 +299,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
             rcond = std::min(rcond, solver->stats().factor.rcond);
             start_set = active;
             out.contact_closed.assign(active.begin(), active.end());
-            fill_case(c, p, working, s, specs[i].factors, out);
+            fill_case(c, p, working, s, specs[i].factors, spr, out);
             check_finite(out);
         }
     }
