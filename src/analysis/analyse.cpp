@@ -172,6 +172,34 @@ std::vector<fe::Solution> solve_named(const fe::LinearStaticProblem& solver,
     }
 }
 
+// The order to solve contact cases in: each next the remaining case whose
+// applied forces are most nearly parallel to the last one's (cosine of the
+// angle between the force vectors), starting with the first. Cases with
+// nearly proportional loads settle on nearly the same contact set, and each
+// case starts from the previous one's set, so this keeps the changes of set
+// (and the factor modifications or refactorizations they cost) small. The
+// settled solution of a case does not depend on where its iteration starts.
+std::vector<size_t> similar_first_order(const fe::Model& model,
+                                        const std::vector<fe::Loads>& loads) {
+    std::vector<Eigen::VectorXd> f;
+    for (const fe::Loads& l : loads) {
+        f.push_back(fe::applied_forces(model, l));
+        const double norm = f.back().norm();
+        if (norm > 0) f.back() /= norm;
+    }
+    std::vector<size_t> order;
+    std::vector<bool> done(loads.size(), false);
+    for (size_t next = 0; order.size() < loads.size();) {
+        order.push_back(next);
+        done[next] = true;
+        double best = -2;
+        for (size_t j = 0; j < loads.size(); ++j)
+            if (!done[j] && f[order.back()].dot(f[j]) > best)
+                best = f[order.back()].dot(f[j]), next = j;
+    }
+    return order;
+}
+
 } // namespace
 
 Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout) {
@@ -245,11 +273,14 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         std::vector<double> k0(working.link_springs.size());
         for (size_t j = 0; j < k0.size(); ++j) k0[j] = working.link_springs[j].k;
         std::vector<bool> start_set(k0.size(), true);
-        for (size_t i = 0; i < specs.size(); ++i) {
+        std::vector<fe::Loads> case_loads;
+        for (const CaseSpec& spec : specs)
+            case_loads.push_back(loads_for(c, mesh, p, spec.factors));
+        for (const size_t i : similar_first_order(working, case_loads)) {
             CaseResult& out = results.cases[i];
             out.name = specs[i].name;
             out.combination = specs[i].combination;
-            const fe::Loads loads = loads_for(c, mesh, p, specs[i].factors);
+            const fe::Loads& loads = case_loads[i];
             std::vector<bool> active = start_set;
             std::set<std::vector<bool>> seen;
             bool settled = false;

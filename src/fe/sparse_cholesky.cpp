@@ -96,6 +96,7 @@ public:
     }
     ~Cholmod() override {
         if (factor_) cholmod_free_factor(&factor_, &common_);
+        if (symbolic_) cholmod_free_factor(&symbolic_, &common_);
         cholmod_finish(&common_);
     }
     Cholmod(const Cholmod&) = delete;
@@ -108,10 +109,18 @@ public:
         cholmod_sparse A = view(pattern, {});
         A.xtype = CHOLMOD_PATTERN;
         if (factor_) cholmod_free_factor(&factor_, &common_);
+        if (symbolic_) cholmod_free_factor(&symbolic_, &common_);
         factor_ = cholmod_analyze(&A, &common_);
         if (!factor_)
             throw std::runtime_error(
                 fmt::format("CHOLMOD analysis failed (status {})", common_.status));
+        // The symbolic factor (ordering and supernodes) is small next to the
+        // numeric one; a copy restores it after modify() has turned the
+        // factor simplicial, instead of ordering the same pattern again.
+        symbolic_ = cholmod_copy_factor(factor_, &common_);
+        if (!symbolic_)
+            throw std::runtime_error(
+                fmt::format("CHOLMOD could not copy the analysis (status {})", common_.status));
         stats_.seconds_analyse = seconds_since(start);
         stats_.nnz_A = static_cast<double>(pattern.nnz());
         static constexpr const char* names[] = {
@@ -120,9 +129,16 @@ public:
         stats_.ordering = (o >= 0 && o <= 6) ? names[o] : "?";
     }
     void factorize(const SparsePattern& pattern, std::span<const double> values) override {
-        // A modified factor is simplicial LDLᵀ: analyse again for a
-        // supernodal factorization.
-        if (modified_) analyse(pattern), modified_ = false;
+        // A modified factor is simplicial LDLᵀ: start again from the kept
+        // supernodal analysis of the same pattern.
+        if (modified_) {
+            cholmod_free_factor(&factor_, &common_);
+            factor_ = cholmod_copy_factor(symbolic_, &common_);
+            if (!factor_)
+                throw std::runtime_error(
+                    fmt::format("CHOLMOD could not copy the analysis (status {})", common_.status));
+            modified_ = false;
+        }
         const auto start = std::chrono::steady_clock::now();
         cholmod_sparse A = view(pattern, values);
         cholmod_factorize(&A, factor_, &common_);
@@ -225,7 +241,8 @@ private:
     Ordering ordering_;
     mutable cholmod_common common_{};
     cholmod_factor* factor_ = nullptr;
-    bool modified_ = false; // by modify(): simplicial LDLᵀ now
+    cholmod_factor* symbolic_ = nullptr; // copy of the analysis, for after modify()
+    bool modified_ = false;              // by modify(): simplicial LDLᵀ now
     FactorStats stats_{"CHOLMOD supernodal", "?"};
 };
 #endif
