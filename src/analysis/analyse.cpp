@@ -8,8 +8,6 @@
 #include "fe/recovery.hpp"
 
 #include <chrono>
-#include <cstdio>
-#include <cstdlib>
 #include <cmath>
 #include <fmt/format.h>
 #include <numbers>
@@ -321,7 +319,6 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                     fmt::format("bearing contact in load case \"{}\" did not settle in {} passes",
                                 out.name, max_contact_iterations));
             fe::Solution s = solve_named(*solver, std::span(&loads, 1), specs, {i}).front();
-            if (getenv("LWDBG")) fprintf(stderr, "case %zu settled after %d passes, residual %.3g\n", i, out.contact_iterations, s.relative_residual);
             if (!(s.relative_residual <= 1e-10)) {
                 try {
                     solver->refactorize(working);

@@ -6,8 +6,6 @@
 
 #include <chrono>
 #include <cmath>
-#include <cstdio>
-#include <cstdlib>
 #include <fmt/format.h>
 
 namespace lapwing::fe {
@@ -58,7 +56,6 @@ void LinearStaticProblem::refactorize(const Model& model) {
 }
 
 void LinearStaticProblem::assemble_and_factorize() {
-    if (getenv("LWDBG")) fprintf(stderr, "assemble_and_factorize n=%d\n", map_.n_unknowns());
     const auto start = std::chrono::steady_clock::now();
     assembler_->assemble(*model_, values_, prescribed_load_);
     stats_.seconds_assemble = seconds_since(start);
@@ -106,7 +103,6 @@ bool LinearStaticProblem::update_link_springs(const Model& model, int max_rank) 
         if (dk == 0.0) continue;
         if (!assembler_->link_column(model, static_cast<int>(j), column) ||
             n_added + n_removed >= max_rank) {
-            if (getenv("LWDBG")) fprintf(stderr, "refactorize: rank\n");
             refactorize(model);
             return false;
         }
@@ -117,7 +113,6 @@ bool LinearStaticProblem::update_link_springs(const Model& model, int max_rank) 
             entries.emplace_back(unknown, col, std::sqrt(std::abs(dk)) * c);
     }
     if (n_added + n_removed == 0) return true;
-    if (getenv("LWDBG")) fprintf(stderr, "updown add %d remove %d of %zu\n", n_added, n_removed, factored_link_k_.size());
     const auto as_matrix = [&](const std::vector<Eigen::Triplet<double>>& entries, int cols) {
         Eigen::SparseMatrix<double> m(map_.n_unknowns(), cols);
         m.setFromTriplets(entries.begin(), entries.end());
@@ -127,7 +122,6 @@ bool LinearStaticProblem::update_link_springs(const Model& model, int max_rank) 
     const bool ok = (n_added == 0 || cholesky_->modify(as_matrix(added, n_added), true)) &&
                     (n_removed == 0 || cholesky_->modify(as_matrix(removed, n_removed), false));
     if (!ok || cholesky_->stats().rcond < 1e-15) {
-        if (getenv("LWDBG")) fprintf(stderr, "refactorize: modify failed ok=%d\n", ok);
         refactorize(model); // and its messages, should the matrix be singular
         return false;
     }
