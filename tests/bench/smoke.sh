@@ -6,7 +6,8 @@
 set -eu
 cd "$(dirname "$0")/../.."
 cmake --preset bench > /dev/null
-cmake --build build/bench -j2
+cmake --build build/bench -j2 --target bench_fe_solve bench_fe_elements bench_fe_calculix \
+    mesh_bench bench_analysis
 bin=build/bench/tests/bench
 "$bin/fe/bench_fe_solve" --smoke
 "$bin/fe/bench_fe_elements" --smoke
