@@ -39,13 +39,17 @@ double gap(const fe::LinkSpring& s, const Eigen::VectorXd& u) {
     return (node_u(u, s.node_b) - node_u(u, s.node_a)).dot(s.direction);
 }
 
+// `spr` holds the patch fits of the mesh, built by the first case and
+// applied to every later one.
 void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& model,
                const fe::Solution& s, const std::map<std::string, double>& factors,
-               CaseResult& out) {
+               std::optional<fe::SprRecovery>& spr, CaseResult& out) {
     out.u = s.u;
     out.dof_reactions = s.reactions;
     out.solver_residual = s.relative_residual;
-    auto nodal = fe::recover_spr(model, fe::spr_samples(model, s.u));
+    const fe::SampledStresses samples = fe::spr_samples(model, s.u);
+    if (!spr) spr.emplace(model, samples);
+    auto nodal = spr->recover(samples);
     nodal.resize(static_cast<size_t>(p.n_plate_nodes));
     out.nodal_stress = std::move(nodal);
 
@@ -168,6 +172,34 @@ std::vector<fe::Solution> solve_named(const fe::LinearStaticProblem& solver,
     }
 }
 
+// The order to solve contact cases in: each next the remaining case whose
+// applied forces are most nearly parallel to the last one's (cosine of the
+// angle between the force vectors), starting with the first. Cases with
+// nearly proportional loads settle on nearly the same contact set, and each
+// case starts from the previous one's set, so this keeps the changes of set
+// (and the factor modifications or refactorizations they cost) small. The
+// settled solution of a case does not depend on where its iteration starts.
+std::vector<size_t> similar_first_order(const fe::Model& model,
+                                        const std::vector<fe::Loads>& loads) {
+    std::vector<Eigen::VectorXd> f;
+    for (const fe::Loads& l : loads) {
+        f.push_back(fe::applied_forces(model, l));
+        const double norm = f.back().norm();
+        if (norm > 0) f.back() /= norm;
+    }
+    std::vector<size_t> order;
+    std::vector<bool> done(loads.size(), false);
+    for (size_t next = 0; order.size() < loads.size();) {
+        order.push_back(next);
+        done[next] = true;
+        double best = -2;
+        for (size_t j = 0; j < loads.size(); ++j)
+            if (!done[j] && f[order.back()].dot(f[j]) > best)
+                best = f[order.back()].dot(f[j]), next = j;
+    }
+    return order;
+}
+
 } // namespace
 
 Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout) {
@@ -197,6 +229,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         rethrow_in_connection_terms(c, p, e);
     }
     results.cases.resize(specs.size());
+    std::optional<fe::SprRecovery> spr;
     double rcond = solver->stats().factor.rcond;
     if (!p.has_contact) {
         // Linear: one factorization; combinations are factored sums.
@@ -226,7 +259,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 s.applied += factor * it->second->applied;
                 s.relative_residual = std::max(s.relative_residual, it->second->relative_residual);
             }
-            fill_case(c, p, working, s, specs[i].factors, out);
+            fill_case(c, p, working, s, specs[i].factors, spr, out);
             check_finite(out);
         }
     } else {
@@ -240,11 +273,14 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         std::vector<double> k0(working.link_springs.size());
         for (size_t j = 0; j < k0.size(); ++j) k0[j] = working.link_springs[j].k;
         std::vector<bool> start_set(k0.size(), true);
-        for (size_t i = 0; i < specs.size(); ++i) {
+        std::vector<fe::Loads> case_loads;
+        for (const CaseSpec& spec : specs)
+            case_loads.push_back(loads_for(c, mesh, p, spec.factors));
+        for (const size_t i : similar_first_order(working, case_loads)) {
             CaseResult& out = results.cases[i];
             out.name = specs[i].name;
             out.combination = specs[i].combination;
-            const fe::Loads loads = loads_for(c, mesh, p, specs[i].factors);
+            const fe::Loads& loads = case_loads[i];
             std::vector<bool> active = start_set;
             std::set<std::vector<bool>> seen;
             bool settled = false;
@@ -294,7 +330,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
             rcond = std::min(rcond, solver->stats().factor.rcond);
             start_set = active;
             out.contact_closed.assign(active.begin(), active.end());
-            fill_case(c, p, working, s, specs[i].factors, out);
+            fill_case(c, p, working, s, specs[i].factors, spr, out);
             check_finite(out);
         }
     }

@@ -3,10 +3,10 @@
 
 #include "analysis/analyse.hpp"
 #include "check/peaks.hpp"
+#include "check/reuse_cache.hpp"
 #include "check/section_integral.hpp"
 #include "check/section_lines.hpp"
 #include "fe/point_locator.hpp"
-#include "check/reuse_cache.hpp"
 #include "mesh/size_field.hpp"
 
 #include <algorithm>
@@ -82,13 +82,19 @@ Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settin
         for (size_t w = 0; w < e.welds.size(); ++w)
             wf.push_back(weld_forces(e.welds[w], e.mesh, r.dof_reactions, held[w]));
         e.weld_forces.push_back(std::move(wf));
-        std::vector<SectionStress> ss;
-        for (size_t s = 0; s < e.sections.size(); ++s) {
-            ss.push_back(
-                integrate_section(e.sections[s], p.model, locator, r.u, c.plate.thickness));
-            ss.back().section = static_cast<int>(s);
+    }
+    // Each line's geometry (crossings, located points, free-body cut) once,
+    // for every case.
+    std::vector<const Eigen::VectorXd*> displacements;
+    for (const analysis::CaseResult& r : e.results.cases) displacements.push_back(&r.u);
+    e.section_stress.assign(e.results.cases.size(), {});
+    for (size_t s = 0; s < e.sections.size(); ++s) {
+        std::vector<SectionStress> per_case =
+            integrate_section(e.sections[s], p.model, locator, displacements, c.plate.thickness);
+        for (size_t k = 0; k < per_case.size(); ++k) {
+            per_case[k].section = static_cast<int>(s);
+            e.section_stress[k].push_back(std::move(per_case[k]));
         }
-        e.section_stress.push_back(std::move(ss));
     }
     e.seconds_measure = seconds_since(start);
     return e;

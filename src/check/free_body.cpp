@@ -30,56 +30,66 @@ int find_root(std::vector<int>& parent, int i) {
     return i;
 }
 
-// Σ over `elements` of weight(e) times their nodal forces k_e u_e at the
-// nodes in `cut`, as a force and its moment about `centre`.
-template <typename Weight>
-void add_nodal_forces(const fe::Model& model, const Eigen::VectorXd& u,
-                      const std::vector<int>& elements, const std::vector<char>& cut,
-                      const Vector2d& centre, const Weight& weight, Vector2d& force,
-                      double& moment) {
-    fe::ElementMatrixStorage k;
-    Eigen::Matrix<double, 18, 1> u_e;
-    for (const int e : elements) {
+// Σ over the cut's elements of their weight times their nodal forces k_e u_e
+// at the cut's nodes, as a force and its moment about the cut's centre.
+void add_nodal_forces(const fe::Model& model, const Eigen::VectorXd& u, const FreeBodyCut& cut,
+                      Vector2d& force, double& moment) {
+    Eigen::VectorXd u_e(18), f(18);
+    for (size_t k = 0; k < cut.elements.size(); ++k) {
+        const int e = cut.elements[k];
         const fe::Element& el = model.elements[static_cast<size_t>(e)];
         const int n = fe::node_count(el.kind);
-        bool touches = false;
-        for (int i = 0; i < n; ++i)
-            touches = touches || cut[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
-        if (!touches) continue;
         const fe::Matrix3 D = fe::plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
-        const int n_dofs = fe::element_stiffness(model, e, D, k);
+        u_e.resize(2 * n);
+        f.resize(2 * n);
         for (int i = 0; i < n; ++i) {
             const int node = el.nodes[static_cast<size_t>(i)];
             u_e(2 * i) = u(fe::dof_ux(node));
             u_e(2 * i + 1) = u(fe::dof_uy(node));
         }
-        const Eigen::Matrix<double, 18, 1> f =
-            weight(e) * (k.topLeftCorner(n_dofs, n_dofs) * u_e.head(n_dofs));
+        fe::element_forces(model, e, D, u_e, f);
+        f *= cut.weight[k];
         for (int i = 0; i < n; ++i) {
             const int node = el.nodes[static_cast<size_t>(i)];
-            if (!cut[static_cast<size_t>(node)]) continue;
+            if (!cut.cut[static_cast<size_t>(node)]) continue;
             const Vector2d fi(f(2 * i), f(2 * i + 1));
             force += fi;
-            moment += cross(model.nodes[static_cast<size_t>(node)] - centre, fi);
+            moment += cross(model.nodes[static_cast<size_t>(node)] - cut.centre, fi);
         }
+    }
+}
+
+// Keeps the elements of `candidates` that touch a cut node, with their weight.
+template <typename Weight>
+void keep_touching(const fe::Model& model, int n_candidates, const Weight& weight,
+                   FreeBodyCut& out) {
+    for (int e = 0; e < n_candidates; ++e) {
+        const fe::Element& el = model.elements[static_cast<size_t>(e)];
+        bool touches = false;
+        for (int i = 0; i < fe::node_count(el.kind); ++i)
+            touches = touches || out.cut[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])];
+        if (!touches) continue;
+        out.elements.push_back(e);
+        out.weight.push_back(weight(e));
     }
 }
 
 } // namespace
 
-std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
-                                                     const fe::Model& model,
-                                                     const Eigen::VectorXd& u, double about) {
+std::optional<FreeBodyCut> free_body_cut(const SectionLine& line, const fe::Model& model,
+                                         double about) {
     const double length = line.length();
     if (length <= 0 || model.elements.empty()) return std::nullopt;
     const Vector2d tangent = line.tangent(), normal = line.normal();
     const Vector2d centre = line.from + about * tangent;
     const double tol = 1e-8 * length;
     const auto n_elements = static_cast<int>(model.elements.size());
-    std::vector<char> cut(model.nodes.size(), 0);
-    std::vector<int> body;
-    Vector2d force(0, 0);
-    double moment = 0;
+    FreeBodyCut out;
+    out.centre = centre;
+    out.tangent = tangent;
+    out.normal = normal;
+    std::vector<char>& cut = out.cut;
+    cut.assign(model.nodes.size(), 0);
 
     if (line.kind == SectionKind::weld) {
         // The whole plate; the nodes on the line carry the support's reaction.
@@ -88,16 +98,14 @@ std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
             const double s = r.dot(tangent);
             cut[i] = std::abs(r.dot(normal)) <= tol && s >= -tol && s <= length + tol;
         }
-        body.resize(static_cast<size_t>(n_elements));
-        std::iota(body.begin(), body.end(), 0);
-        add_nodal_forces(
-            model, u, body, cut, centre, [](int) { return 1.0; }, force, moment);
-        if (force.norm() == 0 && moment == 0 &&
-            std::none_of(cut.begin(), cut.end(), [](char c) { return c != 0; }))
+        // No node on the line: no force to sum (and none was found before).
+        if (std::none_of(cut.begin(), cut.end(), [](char c) { return c != 0; }))
             return std::nullopt;
-        // The nodal forces are the support's push on the plate; the traction
-        // σ·n with n into the plate acts on the support, hence the sign.
-        return FreeBodyResultant{-normal.dot(force), -tangent.dot(force), -moment, n_elements};
+        out.weld = true;
+        out.body_elements = n_elements;
+        keep_touching(
+            model, n_elements, [](int) { return 1.0; }, out);
+        return out;
     }
 
     // Which side of the line each element's centroid lies on.
@@ -166,7 +174,7 @@ std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
     for (int e = 0; e < n_elements; ++e)
         if (minus_side.count(find_root(parent, e))) {
             in_body[static_cast<size_t>(e)] = 1;
-            body.push_back(e);
+            ++out.body_elements;
         }
     std::vector<char> on_body(model.nodes.size(), 0), off_body(model.nodes.size(), 0);
     for (int e = 0; e < n_elements; ++e) {
@@ -183,13 +191,31 @@ std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
     // its limit as the mesh is refined, by taking the mean of the body's
     // view (Σ_body) and the other side's (−Σ_rest):
     //   F = ½ Σ_shared nodes (Σ_body k_e u_e − Σ_rest k_e u_e).
-    std::vector<int> all(static_cast<size_t>(n_elements));
-    std::iota(all.begin(), all.end(), 0);
-    add_nodal_forces(
-        model, u, all, cut, centre,
-        [&](int e) { return in_body[static_cast<size_t>(e)] ? 0.5 : -0.5; }, force, moment);
-    return FreeBodyResultant{normal.dot(force), tangent.dot(force), moment,
-                             static_cast<int>(body.size())};
+    keep_touching(
+        model, n_elements, [&](int e) { return in_body[static_cast<size_t>(e)] ? 0.5 : -0.5; },
+        out);
+    return out;
+}
+
+FreeBodyResultant free_body_resultant(const FreeBodyCut& cut, const fe::Model& model,
+                                      const Eigen::VectorXd& u) {
+    Vector2d force(0, 0);
+    double moment = 0;
+    add_nodal_forces(model, u, cut, force, moment);
+    // On a weld line the nodal forces are the support's push on the plate;
+    // the traction σ·n with n into the plate acts on the support, hence the
+    // sign.
+    const double sign = cut.weld ? -1.0 : 1.0;
+    return FreeBodyResultant{sign * cut.normal.dot(force), sign * cut.tangent.dot(force),
+                             sign * moment, cut.body_elements};
+}
+
+std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
+                                                     const fe::Model& model,
+                                                     const Eigen::VectorXd& u, double about) {
+    const auto cut = free_body_cut(line, model, about);
+    if (!cut) return std::nullopt;
+    return free_body_resultant(*cut, model, u);
 }
 
 } // namespace lapwing::check

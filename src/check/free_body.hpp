@@ -7,6 +7,7 @@
 
 #include <Eigen/Core>
 #include <optional>
+#include <vector>
 
 namespace lapwing::check {
 
@@ -27,5 +28,21 @@ struct FreeBodyResultant {
 std::optional<FreeBodyResultant> free_body_resultant(const SectionLine& line,
                                                      const fe::Model& model,
                                                      const Eigen::VectorXd& u, double about);
+
+// The same in two steps: the cut depends on the mesh only (which elements
+// form the body, the nodes it shares with the rest), the resultant on the
+// displacements, so a line's cut serves every load case.
+struct FreeBodyCut {
+    bool weld = false;
+    std::vector<int> elements;  // those touching a cut node
+    std::vector<double> weight; // per element: 1 (weld), ½ body, −½ rest
+    std::vector<char> cut;      // per node: shared by the body and the rest
+    int body_elements = 0;
+    Eigen::Vector2d centre{0, 0}, tangent{0, 0}, normal{0, 0};
+};
+std::optional<FreeBodyCut> free_body_cut(const SectionLine& line, const fe::Model& model,
+                                         double about);
+FreeBodyResultant free_body_resultant(const FreeBodyCut& cut, const fe::Model& model,
+                                      const Eigen::VectorXd& u);
 
 } // namespace lapwing::check

@@ -147,13 +147,33 @@ double material_centroid(const SectionLine& line) {
     return length > 0 ? moment / length : 0.5 * line.length();
 }
 
-SectionStress integrate_section(const SectionLine& line, const fe::Model& model,
-                                const fe::PointLocator& locator, const Eigen::VectorXd& u,
-                                double thickness) {
-    SectionStress out;
-    Frame f{line.from, line.tangent(), line.normal(), line.length(), 0};
+namespace {
+
+// A point of the line where the stress is evaluated: a Gauss point of a
+// sub-piece (weight > 0 on the integral) or a profile point.
+struct LinePoint {
+    double s = 0, w = 0;
+    bool profile = false;
+    bool outside = false; // extrapolated from the sub-piece's element
+    Located at;
+};
+
+// Where a line's stresses are evaluated: mesh geometry only, shared by every
+// load case.
+struct LinePoints {
+    Frame frame;
+    double centre = 0;
+    std::vector<std::vector<LinePoint>> pieces; // per SectionLine::material interval
+    std::optional<FreeBodyCut> cut;
+};
+
+LinePoints line_points(const SectionLine& line, const fe::Model& model,
+                       const fe::PointLocator& locator) {
+    LinePoints out;
+    Frame& f = out.frame;
+    f = Frame{line.from, line.tangent(), line.normal(), line.length(), 0};
     f.tol = 1e-9 * std::max(f.length, 1.0);
-    const double centre = material_centroid(line);
+    out.centre = material_centroid(line);
     if (f.length <= 0) return out;
 
     const std::vector<double> crossings = edge_crossings(model, f);
@@ -176,8 +196,7 @@ SectionStress integrate_section(const SectionLine& line, const fe::Model& model,
 
     int hint = -1;
     for (size_t p = 0; p < line.material.size(); ++p) {
-        const Interval& piece = line.material[p];
-        std::vector<StressSample> samples;
+        std::vector<LinePoint> points;
         const auto& b = breaks[p];
         for (size_t k = 0; k + 1 < b.size(); ++k) {
             const double s0 = b[k], s1 = b[k + 1], half = 0.5 * (s1 - s0);
@@ -185,34 +204,50 @@ SectionStress integrate_section(const SectionLine& line, const fe::Model& model,
             bool extrapolated = false;
             if (const auto mid = locate(model, locator, f, s0 + half, hint, extrapolated))
                 hint = mid->element;
-            auto evaluate = [&](double s) -> std::optional<LineStress> {
+            auto add = [&](double s, double w, bool profile) {
                 bool outside = false;
                 const auto at = locate(model, locator, f, s, hint, outside);
-                if (!at) return std::nullopt;
-                if (outside) ++out.extrapolated_points;
-                return resolve(
-                    fe::element_stress(model, at->element, u, at->reference.x(), at->reference.y()),
-                    f);
+                if (at) points.push_back({s, w, profile, outside, *at});
             };
-            for (int g = 0; g < rule.n; ++g) {
-                const double s = s0 + half * (1 + rule.x[static_cast<size_t>(g)]);
-                const double w = half * rule.w[static_cast<size_t>(g)];
-                const auto st = evaluate(s);
-                if (!st) continue;
-                out.N += st->normal * thickness * w;
-                out.V += st->shear * thickness * w;
-                out.M += st->normal * (s - centre) * thickness * w;
-                samples.push_back({s - piece.begin, st->normal, w});
-            }
+            for (int g = 0; g < rule.n; ++g)
+                add(s0 + half * (1 + rule.x[static_cast<size_t>(g)]),
+                    half * rule.w[static_cast<size_t>(g)], false);
             // Profile points, evenly spaced; the ends just inside the
             // sub-piece so that each shows its own element's value.
             for (int q = 0; q < per_sub; ++q) {
                 const double r = per_sub == 1 ? 0.5 : static_cast<double>(q) / (per_sub - 1);
-                const double s = s0 + (s1 - s0) * std::clamp(r, 1e-6, 1 - 1e-6);
-                const auto st = evaluate(s);
-                if (!st) continue;
-                out.profile.push_back({s, st->normal, st->shear, st->von_mises});
-                samples.push_back({s - piece.begin, st->normal, 0.0});
+                add(s0 + (s1 - s0) * std::clamp(r, 1e-6, 1 - 1e-6), 0.0, true);
+            }
+        }
+        out.pieces.push_back(std::move(points));
+    }
+    out.cut = free_body_cut(line, model, out.centre);
+    return out;
+}
+
+SectionStress integrate(const SectionLine& line, const LinePoints& points, const fe::Model& model,
+                        const Eigen::VectorXd& u, double thickness) {
+    SectionStress out;
+    const Frame& f = points.frame;
+    const double centre = points.centre;
+    if (f.length <= 0) return out;
+    for (size_t p = 0; p < line.material.size(); ++p) {
+        const Interval& piece = line.material[p];
+        std::vector<StressSample> samples;
+        for (const LinePoint& pt : points.pieces[p]) {
+            if (pt.outside) ++out.extrapolated_points;
+            const LineStress st =
+                resolve(fe::element_stress(model, pt.at.element, u, pt.at.reference.x(),
+                                           pt.at.reference.y()),
+                        f);
+            if (!pt.profile) {
+                out.N += st.normal * thickness * pt.w;
+                out.V += st.shear * thickness * pt.w;
+                out.M += st.normal * (pt.s - centre) * thickness * pt.w;
+                samples.push_back({pt.s - piece.begin, st.normal, pt.w});
+            } else {
+                out.profile.push_back({pt.s, st.normal, st.shear, st.von_mises});
+                samples.push_back({pt.s - piece.begin, st.normal, 0.0});
             }
         }
         const Linearized lin = linearize(piece.length(), samples);
@@ -229,13 +264,35 @@ SectionStress integrate_section(const SectionLine& line, const fe::Model& model,
         out.average_normal = out.N / area;
         out.average_shear = out.V / area;
     }
-    if (const auto fb = free_body_resultant(line, model, u, centre)) {
+    if (points.cut) {
+        const FreeBodyResultant fb = free_body_resultant(*points.cut, model, u);
         out.free_body = true;
-        out.N_free_body = fb->N;
-        out.V_free_body = fb->V;
-        out.M_free_body = fb->M;
+        out.N_free_body = fb.N;
+        out.V_free_body = fb.V;
+        out.M_free_body = fb.M;
     }
     return out;
+}
+
+} // namespace
+
+std::vector<SectionStress> integrate_section(const SectionLine& line, const fe::Model& model,
+                                             const fe::PointLocator& locator,
+                                             std::span<const Eigen::VectorXd* const> u,
+                                             double thickness) {
+    const LinePoints points = line_points(line, model, locator);
+    std::vector<SectionStress> out;
+    out.reserve(u.size());
+    for (const Eigen::VectorXd* one : u)
+        out.push_back(integrate(line, points, model, *one, thickness));
+    return out;
+}
+
+SectionStress integrate_section(const SectionLine& line, const fe::Model& model,
+                                const fe::PointLocator& locator, const Eigen::VectorXd& u,
+                                double thickness) {
+    const Eigen::VectorXd* one = &u;
+    return integrate_section(line, model, locator, std::span(&one, 1), thickness).front();
 }
 
 } // namespace lapwing::check

@@ -7,6 +7,8 @@
 #include "fe/point_locator.hpp"
 
 #include <Eigen/Core>
+#include <span>
+#include <vector>
 
 namespace lapwing::check {
 
@@ -25,6 +27,13 @@ namespace lapwing::check {
 SectionStress integrate_section(const SectionLine& line, const fe::Model& model,
                                 const fe::PointLocator& locator, const Eigen::VectorXd& u,
                                 double thickness);
+
+// The same for several displacement vectors (load cases) of one model: the
+// crossings, the points' elements and the free body's cut are found once.
+std::vector<SectionStress> integrate_section(const SectionLine& line, const fe::Model& model,
+                                             const fe::PointLocator& locator,
+                                             std::span<const Eigen::VectorXd* const> u,
+                                             double thickness);
 
 // Distance along the line of the material's centroid (the point M is taken
 // about), mm from `from`.

@@ -228,16 +228,15 @@ Eigen::MatrixXd Assembler::internal_forces(const Model& model, const Eigen::Matr
     Eigen::MatrixXd f = Eigen::MatrixXd::Zero(model.n_dofs(), u.cols());
     std::vector<Matrix3> D(model.materials.size());
     for (size_t m = 0; m < D.size(); ++m) D[m] = plane_stress_D(model.materials[m]);
-    ElementMatrixStorage k;
     std::array<int, 18> dofs{};
     Eigen::MatrixXd u_e, f_e;
     for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
         const Element& el = model.elements[static_cast<size_t>(e)];
-        const int n_dofs = element_stiffness(model, e, D[static_cast<size_t>(el.material)], k);
-        element_dofs(model, e, dofs);
+        const int n_dofs = element_dofs(model, e, dofs);
         u_e.resize(n_dofs, u.cols());
+        f_e.resize(n_dofs, u.cols());
         for (int a = 0; a < n_dofs; ++a) u_e.row(a) = u.row(dofs[static_cast<size_t>(a)]);
-        f_e.noalias() = k.topLeftCorner(n_dofs, n_dofs) * u_e;
+        element_forces(model, e, D[static_cast<size_t>(el.material)], u_e, f_e);
         for (int a = 0; a < n_dofs; ++a) f.row(dofs[static_cast<size_t>(a)]) += f_e.row(a);
     }
     for (const Spring& s : model.springs) {

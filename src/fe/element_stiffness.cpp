@@ -83,7 +83,11 @@ ElementMatrix<n> stiffness(const NodeCoords<n>& X, const Matrix3& D, double t, i
         area += J.det() * ref.rule.points[static_cast<size_t>(q)].w;
         const StrainOperator<n> B = strain_operator<n>(physical_derivatives<n>(s.dN_dxi, J));
         const double w = ref.rule.points[static_cast<size_t>(q)].w;
-        k.noalias() += B.transpose() * (D * B) * (t * J.det() * w);
+        // Bᵀ (D B) as a coefficient-wise product of fixed size: Eigen's
+        // general matrix product (chosen for 2n×3×2n) costs several times
+        // more for matrices this small.
+        const StrainOperator<n> DB = D * B * (t * J.det() * w);
+        k.noalias() += B.transpose().lazyProduct(DB);
     }
     if (min_det_J < min_det_J_fraction * area / 4.0) report_bad_map<n>(X, element_id);
     return k;
@@ -92,6 +96,34 @@ ElementMatrix<n> stiffness(const NodeCoords<n>& X, const Matrix3& D, double t, i
 template ElementMatrix<4> stiffness<4>(const NodeCoords<4>&, const Matrix3&, double, int);
 template ElementMatrix<8> stiffness<8>(const NodeCoords<8>&, const Matrix3&, double, int);
 template ElementMatrix<9> stiffness<9>(const NodeCoords<9>&, const Matrix3&, double, int);
+
+template <int n>
+void internal_forces(const NodeCoords<n>& X, const Matrix3& D, double t,
+                     const Eigen::Ref<const Eigen::MatrixXd>& u_e,
+                     Eigen::Ref<Eigen::MatrixXd> f_e) {
+    const auto& ref = ReferenceElement<n>::get();
+    f_e.setZero();
+    for (int q = 0; q < ref.rule.n_points; ++q) {
+        const auto& s = ref.at_points[static_cast<size_t>(q)];
+        const Jacobian J = jacobian<n>(X, s.dN_dxi);
+        const StrainOperator<n> B = strain_operator<n>(physical_derivatives<n>(s.dN_dxi, J));
+        const double scale = t * J.det() * ref.rule.points[static_cast<size_t>(q)].w;
+        for (Eigen::Index c = 0; c < u_e.cols(); ++c) {
+            const Stress sigma = D * (B * u_e.col(c)) * scale;
+            f_e.col(c).noalias() += B.transpose() * sigma;
+        }
+    }
+}
+
+template void internal_forces<4>(const NodeCoords<4>&, const Matrix3&, double,
+                                 const Eigen::Ref<const Eigen::MatrixXd>&,
+                                 Eigen::Ref<Eigen::MatrixXd>);
+template void internal_forces<8>(const NodeCoords<8>&, const Matrix3&, double,
+                                 const Eigen::Ref<const Eigen::MatrixXd>&,
+                                 Eigen::Ref<Eigen::MatrixXd>);
+template void internal_forces<9>(const NodeCoords<9>&, const Matrix3&, double,
+                                 const Eigen::Ref<const Eigen::MatrixXd>&,
+                                 Eigen::Ref<Eigen::MatrixXd>);
 
 Eigen::Matrix<double, 3, 4> incompatible_strain_operator(const NodeCoords<4>& X, double xi,
                                                          double eta) {

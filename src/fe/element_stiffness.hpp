@@ -13,6 +13,14 @@ namespace lapwing::fe {
 template <int n>
 ElementMatrix<n> stiffness(const NodeCoords<n>& X, const Matrix3& D, double t, int element_id);
 
+// The nodal forces k u_e of the same element for each column of u_e (2n × c),
+// as Σ_gp Bᵀ (D B u_e) · t · det J · w without forming k: the same sum in
+// another order, about a tenth of the work. The map is not checked (the
+// stiffness was, when the element was assembled).
+template <int n>
+void internal_forces(const NodeCoords<n>& X, const Matrix3& D, double t,
+                     const Eigen::Ref<const Eigen::MatrixXd>& u_e, Eigen::Ref<Eigen::MatrixXd> f_e);
+
 // Q4 plus the incompatible modes P1 = 1−ξ², P2 = 1−η² (Wilson, Taylor,
 // Doherty & Ghaboussi 1973) with the mode derivatives taken through the
 // centre Jacobian J0 and scaled by det J0 / det J (Taylor, Beresford &

@@ -101,75 +101,103 @@ SampledStresses spr_samples(const Model& model, const Eigen::VectorXd& u) {
     return sample_stresses(model, u, 2);
 }
 
-std::vector<Stress> recover_spr(const Model& model, const SampledStresses& samples) {
-    const auto n_nodes = static_cast<size_t>(model.n_nodes());
-    const auto node_elements = elements_of_nodes(model);
-    const auto on_boundary = boundary_corners(model);
-    const int per_element = samples.points_per_element;
+namespace {
 
-    // Interior patches' values at nodes (own vertex, or mean over patches).
-    std::vector<Stress> own(n_nodes, Stress::Zero());
-    std::vector<bool> has_own(n_nodes, false);
-    std::vector<Stress> shared(n_nodes, Stress::Zero()), boundary_fit(n_nodes, Stress::Zero());
-    std::vector<int> n_shared(n_nodes, 0), n_boundary_fit(n_nodes, 0);
+// The complete polynomial basis 1, X, Y, X², XY, Y² in a patch's local,
+// scaled coordinates (the first n_terms used).
+Eigen::Matrix<double, 1, 6> spr_basis(const Vector2& x, const Vector2& origin, double h) {
+    const double X = (x.x() - origin.x()) / h, Y = (x.y() - origin.y()) / h;
+    Eigen::Matrix<double, 1, 6> row;
+    row << 1, X, Y, X * X, X * Y, Y * Y;
+    return row;
+}
+
+} // namespace
+
+SprRecovery::SprRecovery(const Model& model, const SampledStresses& samples)
+    : model_(&model), per_element_(samples.points_per_element),
+      node_elements_(elements_of_nodes(model)) {
+    const auto n_nodes = static_cast<size_t>(model.n_nodes());
+    const auto on_boundary = boundary_corners(model);
     std::vector<bool> is_corner(n_nodes, false);
     for (const Element& el : model.elements)
         for (int i = 0; i < 4; ++i)
             is_corner[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])] = true;
 
     Eigen::MatrixXd A;
-    Eigen::MatrixXd b;
     for (size_t v = 0; v < n_nodes; ++v) {
-        if (!is_corner[v] || node_elements[v].empty()) continue;
-        const auto& patch = node_elements[v];
+        if (!is_corner[v] || node_elements_[v].empty()) continue;
+        const auto& patch = node_elements_[v];
         const bool quadratic = std::any_of(patch.begin(), patch.end(), [&](int e) {
             return is_quadratic(model.elements[static_cast<size_t>(e)].kind);
         });
         const int n_terms = quadratic ? 6 : 3;
-        const int n_points = static_cast<int>(patch.size()) * per_element;
+        const int n_points = static_cast<int>(patch.size()) * per_element_;
         if (n_points < n_terms + 1) continue;
         // Local, scaled coordinates keep the normal equations well conditioned.
         const Vector2 origin = model.nodes[v];
         double h = 0;
         for (int e : patch)
-            for (int q = 0; q < per_element; ++q)
+            for (int q = 0; q < per_element_; ++q)
                 h = std::max(
-                    h, (samples.point[static_cast<size_t>(e * per_element + q)] - origin).norm());
+                    h, (samples.point[static_cast<size_t>(e * per_element_ + q)] - origin).norm());
         if (h == 0) continue;
-        auto basis = [&](const Vector2& x) {
-            const double X = (x.x() - origin.x()) / h, Y = (x.y() - origin.y()) / h;
-            Eigen::Matrix<double, 1, 6> row;
-            row << 1, X, Y, X * X, X * Y, Y * Y;
-            return Eigen::RowVectorXd(row.head(n_terms));
-        };
         A.resize(n_points, n_terms);
-        b.resize(n_points, 3);
         int r = 0;
         for (int e : patch)
-            for (int q = 0; q < per_element; ++q, ++r) {
-                const auto k = static_cast<size_t>(e * per_element + q);
-                A.row(r) = basis(samples.point[k]);
-                b.row(r) = samples.stress[k].transpose();
-            }
+            for (int q = 0; q < per_element_; ++q, ++r)
+                A.row(r) =
+                    spr_basis(samples.point[static_cast<size_t>(e * per_element_ + q)], origin, h)
+                        .head(n_terms);
         const Eigen::MatrixXd AtA = A.transpose() * A;
         const Eigen::LDLT<Eigen::MatrixXd> normal(AtA);
         // Reject a patch whose points do not determine the polynomial (e.g.
         // collinear samples): its smallest pivot collapses.
         const Eigen::VectorXd d = normal.vectorD();
         if (normal.info() != Eigen::Success || d.minCoeff() <= 1e-10 * d.maxCoeff()) continue;
-        const Eigen::MatrixXd coefficients = normal.solve(A.transpose() * b); // n_terms × 3
+        // The fit depends on the mesh only: coefficients = (AᵀA)⁻¹Aᵀ b for
+        // the sampled values b of any load case.
+        patches_.push_back({static_cast<int>(v), static_cast<bool>(on_boundary[v]), n_terms, origin,
+                            h, normal.solve(A.transpose())});
+    }
+}
+
+std::vector<Stress> SprRecovery::recover(const SampledStresses& samples) const {
+    const Model& model = *model_;
+    const auto n_nodes = static_cast<size_t>(model.n_nodes());
+    const int per_element = per_element_;
+
+    // Interior patches' values at nodes (own vertex, or mean over patches).
+    std::vector<Stress> own(n_nodes, Stress::Zero());
+    std::vector<bool> has_own(n_nodes, false);
+    std::vector<Stress> shared(n_nodes, Stress::Zero()), boundary_fit(n_nodes, Stress::Zero());
+    std::vector<int> n_shared(n_nodes, 0), n_boundary_fit(n_nodes, 0);
+
+    Eigen::MatrixXd b;
+    Eigen::MatrixXd coefficients;
+    for (const Patch& patch : patches_) {
+        const auto v = static_cast<size_t>(patch.vertex);
+        const auto& elements = node_elements_[v];
+        b.resize(patch.fit.cols(), 3);
+        int r = 0;
+        for (int e : elements)
+            for (int q = 0; q < per_element; ++q, ++r)
+                b.row(r) = samples.stress[static_cast<size_t>(e * per_element + q)].transpose();
+        coefficients.noalias() = patch.fit * b; // n_terms × 3
         auto value_at = [&](int node) {
-            return Stress(
-                (basis(model.nodes[static_cast<size_t>(node)]) * coefficients).transpose());
+            return Stress((spr_basis(model.nodes[static_cast<size_t>(node)], patch.origin, patch.h)
+                               .head(patch.n_terms) *
+                           coefficients)
+                              .transpose());
         };
-        if (!on_boundary[v]) {
-            own[v] = value_at(static_cast<int>(v));
+        if (!patch.boundary) {
+            own[v] = value_at(patch.vertex);
             has_own[v] = true;
         }
-        for (int e : patch)
+        for (int e : elements)
             for (int node : nodes_of(model.elements[static_cast<size_t>(e)])) {
                 const auto nd = static_cast<size_t>(node);
-                if (!on_boundary[v]) {
+                if (!patch.boundary) {
                     shared[nd] += value_at(node);
                     ++n_shared[nd];
                 } else {
@@ -180,7 +208,6 @@ std::vector<Stress> recover_spr(const Model& model, const SampledStresses& sampl
     }
 
     // Fallback for nodes no patch reaches.
-    std::vector<Stress> fallback;
     std::vector<Stress> out(n_nodes, Stress::Zero());
     for (size_t i = 0; i < n_nodes; ++i) {
         if (has_own[i])
@@ -193,13 +220,17 @@ std::vector<Stress> recover_spr(const Model& model, const SampledStresses& sampl
             // Average of the sampled values of the node's elements.
             Stress s = Stress::Zero();
             int count = 0;
-            for (int e : node_elements[i])
+            for (int e : node_elements_[i])
                 for (int q = 0; q < per_element; ++q, ++count)
                     s += samples.stress[static_cast<size_t>(e * per_element + q)];
             out[i] = count > 0 ? Stress(s / count) : Stress::Zero();
         }
     }
     return out;
+}
+
+std::vector<Stress> recover_spr(const Model& model, const SampledStresses& samples) {
+    return SprRecovery(model, samples).recover(samples);
 }
 
 ErrorEstimate zz_error_estimate(const Model& model, const Eigen::VectorXd& u,

@@ -30,6 +30,31 @@ SampledStresses spr_samples(const Model& model, const Eigen::VectorXd& u);
 // exactly. `samples` must come from spr_samples (or have its layout).
 std::vector<Stress> recover_spr(const Model& model, const SampledStresses& samples);
 
+// recover_spr split in two: the patch fits, which depend on the mesh only
+// (built once from the sample points' layout), and their application to the
+// sampled values of any number of load cases (a few multiply-adds per patch).
+// Keeps a reference to `model`.
+class SprRecovery {
+public:
+    SprRecovery(const Model& model, const SampledStresses& samples);
+    // `samples` at the same points as those the recovery was built from.
+    std::vector<Stress> recover(const SampledStresses& samples) const;
+
+private:
+    struct Patch {
+        int vertex = 0;
+        bool boundary = false;
+        int n_terms = 0;
+        Vector2 origin{0, 0};
+        double h = 0;
+        Eigen::MatrixXd fit; // n_terms × points: coefficients = fit · sampled values
+    };
+    const Model* model_;
+    int per_element_ = 0;
+    std::vector<std::vector<int>> node_elements_;
+    std::vector<Patch> patches_;
+};
+
 struct ErrorEstimate {
     std::vector<double> element_error; // ‖σ* − σ_h‖ in the energy norm, per element
     double error_norm = 0;             // √Σ element_error²

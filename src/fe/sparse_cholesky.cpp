@@ -92,10 +92,16 @@ public:
             common_.method[0].ordering = CHOLMOD_NATURAL;
             common_.postorder = 0;
             break;
+        case Ordering::node_amd:
+            common_.nmethods = 1;
+            common_.method[0].ordering = CHOLMOD_GIVEN;
+            common_.postorder = 1;
+            break;
         }
     }
     ~Cholmod() override {
         if (factor_) cholmod_free_factor(&factor_, &common_);
+        if (symbolic_) cholmod_free_factor(&symbolic_, &common_);
         cholmod_finish(&common_);
     }
     Cholmod(const Cholmod&) = delete;
@@ -108,21 +114,43 @@ public:
         cholmod_sparse A = view(pattern, {});
         A.xtype = CHOLMOD_PATTERN;
         if (factor_) cholmod_free_factor(&factor_, &common_);
-        factor_ = cholmod_analyze(&A, &common_);
+        if (symbolic_) cholmod_free_factor(&symbolic_, &common_);
+        if (ordering_ == Ordering::node_amd) {
+            std::vector<int> perm = node_amd_permutation(pattern);
+            factor_ = cholmod_analyze_p(&A, perm.data(), nullptr, 0, &common_);
+        } else {
+            factor_ = cholmod_analyze(&A, &common_);
+        }
         if (!factor_)
             throw std::runtime_error(
                 fmt::format("CHOLMOD analysis failed (status {})", common_.status));
+        // The symbolic factor (ordering and supernodes) is small next to the
+        // numeric one; a copy restores it after modify() has turned the
+        // factor simplicial, instead of ordering the same pattern again.
+        symbolic_ = cholmod_copy_factor(factor_, &common_);
+        if (!symbolic_)
+            throw std::runtime_error(
+                fmt::format("CHOLMOD could not copy the analysis (status {})", common_.status));
         stats_.seconds_analyse = seconds_since(start);
         stats_.nnz_A = static_cast<double>(pattern.nnz());
         static constexpr const char* names[] = {
             "natural", "given", "AMD", "METIS", "nested dissection", "COLAMD", "postordered"};
         const int o = factor_->ordering;
-        stats_.ordering = (o >= 0 && o <= 6) ? names[o] : "?";
+        stats_.ordering = ordering_ == Ordering::node_amd ? "AMD on nodes"
+                          : (o >= 0 && o <= 6)            ? names[o]
+                                                          : "?";
     }
     void factorize(const SparsePattern& pattern, std::span<const double> values) override {
-        // A modified factor is simplicial LDLᵀ: analyse again for a
-        // supernodal factorization.
-        if (modified_) analyse(pattern), modified_ = false;
+        // A modified factor is simplicial LDLᵀ: start again from the kept
+        // supernodal analysis of the same pattern.
+        if (modified_) {
+            cholmod_free_factor(&factor_, &common_);
+            factor_ = cholmod_copy_factor(symbolic_, &common_);
+            if (!factor_)
+                throw std::runtime_error(
+                    fmt::format("CHOLMOD could not copy the analysis (status {})", common_.status));
+            modified_ = false;
+        }
         const auto start = std::chrono::steady_clock::now();
         cholmod_sparse A = view(pattern, values);
         cholmod_factorize(&A, factor_, &common_);
@@ -206,6 +234,109 @@ public:
     }
 
 private:
+    // Groups maximal runs of consecutive unknowns whose columns of the full
+    // symmetric pattern are equal (a node's ux and uy when both are free:
+    // DofMap numbers them one after the other), orders the graph of the
+    // groups with CHOLMOD's AMD, and lists each group's unknowns in turn.
+    std::vector<int> node_amd_permutation(const SparsePattern& p) {
+        const int n = p.n;
+        // The full symmetric adjacency (both triangles, diagonal left out).
+        std::vector<int> start(static_cast<size_t>(n) + 1, 0);
+        for (int j = 0; j < n; ++j)
+            for (int k = p.col_start[static_cast<size_t>(j)];
+                 k < p.col_start[static_cast<size_t>(j) + 1]; ++k) {
+                const int i = p.row[static_cast<size_t>(k)];
+                if (i == j) continue;
+                ++start[static_cast<size_t>(i) + 1];
+                ++start[static_cast<size_t>(j) + 1];
+            }
+        for (size_t j = 0; j < static_cast<size_t>(n); ++j) start[j + 1] += start[j];
+        std::vector<int> adj(static_cast<size_t>(start.back()));
+        {
+            std::vector<int> fill(start.begin(), start.end() - 1);
+            // Columns in order: each list comes out sorted (upper part first,
+            // by column, then the lower part, by row).
+            for (int j = 0; j < n; ++j)
+                for (int k = p.col_start[static_cast<size_t>(j)];
+                     k < p.col_start[static_cast<size_t>(j) + 1]; ++k) {
+                    const int i = p.row[static_cast<size_t>(k)];
+                    if (i == j) continue;
+                    adj[static_cast<size_t>(fill[static_cast<size_t>(i)]++)] = j;
+                }
+            for (int j = 0; j < n; ++j)
+                for (int k = p.col_start[static_cast<size_t>(j)];
+                     k < p.col_start[static_cast<size_t>(j) + 1]; ++k) {
+                    const int i = p.row[static_cast<size_t>(k)];
+                    if (i == j) continue;
+                    adj[static_cast<size_t>(fill[static_cast<size_t>(j)]++)] = i;
+                }
+        }
+        // j and j+1 are one group when adj(j) ∪ {j} = adj(j+1) ∪ {j+1}.
+        const auto same = [&](int j) {
+            const auto a0 = adj.begin() + start[static_cast<size_t>(j)],
+                       a1 = adj.begin() + start[static_cast<size_t>(j) + 1];
+            const auto b0 = a1, b1 = adj.begin() + start[static_cast<size_t>(j) + 2];
+            if (a1 - a0 != b1 - b0) return false;
+            // Both hold each other; compare the rest, skipping j+1 in a and j in b.
+            auto a = a0, b = b0;
+            while (a != a1 || b != b1) {
+                if (a != a1 && *a == j + 1) {
+                    ++a;
+                    continue;
+                }
+                if (b != b1 && *b == j) {
+                    ++b;
+                    continue;
+                }
+                if (a == a1 || b == b1 || *a != *b) return false;
+                ++a, ++b;
+            }
+            return true;
+        };
+        std::vector<int> group_of(static_cast<size_t>(n));
+        std::vector<int> group_start{0};
+        for (int j = 0; j < n; ++j) {
+            group_of[static_cast<size_t>(j)] = static_cast<int>(group_start.size()) - 1;
+            if (j + 1 == n || !same(j)) group_start.push_back(j + 1);
+        }
+        const auto n_groups = static_cast<int>(group_start.size()) - 1;
+        // The groups' graph, lower triangle: from each group's first unknown.
+        std::vector<int> gp{0}, gi;
+        gi.reserve(adj.size() / 4 + static_cast<size_t>(n_groups));
+        for (int g = 0; g < n_groups; ++g) {
+            const int j = group_start[static_cast<size_t>(g)];
+            int last = -1;
+            for (int k = start[static_cast<size_t>(j)]; k < start[static_cast<size_t>(j) + 1];
+                 ++k) {
+                const int h = group_of[static_cast<size_t>(adj[static_cast<size_t>(k)])];
+                if (h > g && h != last) gi.push_back(h), last = h;
+            }
+            gp.push_back(static_cast<int>(gi.size()));
+        }
+        cholmod_sparse G{};
+        G.nrow = G.ncol = static_cast<size_t>(n_groups);
+        G.nzmax = gi.size();
+        G.p = gp.data();
+        G.i = gi.data();
+        G.stype = -1;
+        G.itype = CHOLMOD_INT;
+        G.xtype = CHOLMOD_PATTERN;
+        G.dtype = CHOLMOD_DOUBLE;
+        G.sorted = 1;
+        G.packed = 1;
+        std::vector<int> group_perm(static_cast<size_t>(n_groups));
+        if (!cholmod_amd(&G, nullptr, 0, group_perm.data(), &common_))
+            throw std::runtime_error(
+                fmt::format("CHOLMOD's AMD failed on the node graph (status {})", common_.status));
+        std::vector<int> perm;
+        perm.reserve(static_cast<size_t>(n));
+        for (const int g : group_perm)
+            for (int j = group_start[static_cast<size_t>(g)];
+                 j < group_start[static_cast<size_t>(g) + 1]; ++j)
+                perm.push_back(j);
+        return perm;
+    }
+
     static cholmod_sparse view(const SparsePattern& p, std::span<const double> values) {
         cholmod_sparse A{};
         A.nrow = A.ncol = static_cast<size_t>(p.n);
@@ -225,7 +356,8 @@ private:
     Ordering ordering_;
     mutable cholmod_common common_{};
     cholmod_factor* factor_ = nullptr;
-    bool modified_ = false; // by modify(): simplicial LDLᵀ now
+    cholmod_factor* symbolic_ = nullptr; // copy of the analysis, for after modify()
+    bool modified_ = false;              // by modify(): simplicial LDLᵀ now
     FactorStats stats_{"CHOLMOD supernodal", "?"};
 };
 #endif

@@ -17,7 +17,10 @@
 namespace lapwing::fe {
 
 enum class SolverBackend { cholmod, eigen_ldlt };
-enum class Ordering { automatic, amd, metis, natural };
+// node_amd: AMD on the graph of groups of consecutive unknowns with the same
+// adjacency (the ux, uy of a node), expanded to the unknowns; a quarter of
+// the edges of the unknowns' graph for plane elements.
+enum class Ordering { automatic, amd, metis, natural, node_amd };
 
 struct SolverOptions {
 #ifdef LAPWING_HAVE_CHOLMOD

@@ -3,6 +3,7 @@
 // cost of 1, 10 and 100 load cases on one factorization, and the bearing
 // contact iteration count and cost relative to one linear solve.
 //   bench_analysis [--repeats N]      (medians of N runs, default 5)
+//   bench_analysis --smoke            (one run of templates/lap-splice.toml only)
 #include "analysis/analyse.hpp"
 #include "analysis/fe_problem.hpp"
 #include "fe/linear_static.hpp"
@@ -34,8 +35,12 @@ double median(std::vector<double> v) {
 
 int main(int argc, char** argv) {
     int repeats = 5;
-    for (int i = 1; i + 1 < argc; ++i)
-        if (std::strcmp(argv[i], "--repeats") == 0) repeats = std::max(1, std::atoi(argv[i + 1]));
+    bool smoke = false;
+    for (int i = 1; i < argc; ++i) {
+        if (std::strcmp(argv[i], "--smoke") == 0) smoke = true, repeats = 1;
+        if (i + 1 < argc && std::strcmp(argv[i], "--repeats") == 0)
+            repeats = std::max(1, std::atoi(argv[i + 1]));
+    }
     std::vector<std::filesystem::path> files;
     for (const auto& e : std::filesystem::directory_iterator(
              std::filesystem::path(LAPWING_SOURCE_DIR) / "templates"))
@@ -44,6 +49,8 @@ int main(int argc, char** argv) {
              std::filesystem::path(LAPWING_SOURCE_DIR) / "projects"))
         if (e.path().extension() == ".toml") files.push_back(e.path());
     std::sort(files.begin(), files.end());
+    if (smoke)
+        std::erase_if(files, [](const auto& f) { return f.filename() != "lap-splice.toml"; });
 
     std::printf("%-22s %7s %6s %5s %9s %9s %9s %8s | %9s %9s %9s %9s\n", "template", "dofs",
                 "cases", "tie", "mesh s", "analyse s", "per case", "passes", "factor s", "1 rhs s",

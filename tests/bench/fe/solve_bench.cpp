@@ -68,7 +68,8 @@ fe::Ordering parse_ordering(const std::string& s) {
     if (s == "amd") return fe::Ordering::amd;
     if (s == "metis") return fe::Ordering::metis;
     if (s == "automatic") return fe::Ordering::automatic;
-    throw std::invalid_argument("--ordering " + s + ": expected amd, metis or automatic");
+    if (s == "node-amd") return fe::Ordering::node_amd;
+    throw std::invalid_argument("--ordering " + s + ": expected amd, node-amd, metis or automatic");
 }
 
 long parse_count(const std::string& flag, const std::string& s) {
@@ -109,10 +110,10 @@ Options parse(int argc, char** argv) {
         else if (arg == "--no-problem-path")
             o.problem_path = false;
         else
-            throw std::invalid_argument(
-                "unknown argument " + arg +
-                " (use --smoke | --kind K --dofs N [--repeats N] [--ordering amd|metis|automatic]"
-                " [--eigen-max-dofs N | --no-eigen] [--no-problem-path])");
+            throw std::invalid_argument("unknown argument " + arg +
+                                        " (use --smoke | --kind K --dofs N [--repeats N] "
+                                        "[--ordering amd|node-amd|metis|automatic]"
+                                        " [--eigen-max-dofs N | --no-eigen] [--no-problem-path])");
     }
     return o;
 }
