@@ -28,6 +28,33 @@ results = json.load(open(out + "/results.json"))
 schema = json.load(open(schema_path))
 jsonschema.Draft7Validator.check_schema(schema)
 jsonschema.validate(results, schema)
+
+# --- every key of results.json is documented in docs/results.md -------------
+# Names that are the user's data (parameter names, load cases as map keys,
+# families as map keys) are values, not keys of the layout.
+doc = open(schema_path.replace("results.schema.json", "results.md")).read()
+data_maps = {".model.parameters", ".model.combinations[].factors", ".model.members[].forces",
+             ".checks.governing_by_family"}
+missing = set()
+
+
+def keys(node, path):
+    if isinstance(node, dict):
+        for k, v in node.items():
+            if path in data_maps:
+                keys(v, path + ".*")
+                continue
+            if "`" + k + "`" not in doc and "`" + k + "[]`" not in doc:
+                missing.add(path + "." + k)
+            keys(v, path + "." + k)
+    elif isinstance(node, list):
+        for v in node:
+            keys(v, path + "[]")
+
+
+keys(results, "")
+assert not missing, "keys of results.json not in docs/results.md: " + ", ".join(sorted(missing))
+ok("every results.json key is documented in docs/results.md")
 ok("results.json validates against docs/results.schema.json")
 
 # --- the figures: every case has its own, each listed one is on disk --------
