@@ -132,7 +132,7 @@ TEST_CASE("figures: contour, deformed shape and bolt forces for every case, dist
     }
     CHECK(kinds_by_case.size() == 4);
     const std::set<std::string> per_case = {"contour", "deformed", "bolt-forces"};
-    for (const auto& [name, kinds] : kinds_by_case) CHECK_MESSAGE(kinds == per_case, name);
+    for (const auto& entry : kinds_by_case) CHECK_MESSAGE(entry.second == per_case, entry.first);
     CHECK(files.count("contour-D_L.svg") == 1);
     CHECK(files.count("contour-D_L-2.svg") == 1);
     CHECK(files.count("contour-1.2D___1.6L.svg") == 1);

@@ -15,7 +15,10 @@ using namespace lapwing::fe;
 TEST_CASE("Cook's membrane, plain Q4: the classic 2, 4, 8, 16 mesh sequence") {
     const std::array<std::pair<int, double>, 4> table = {
         {{2, 11.85}, {4, 18.30}, {8, 22.08}, {16, 23.43}}};
-    for (const auto& [n, expected] : table) {
+    // Not a structured binding: clang 14 cannot capture one in CAPTURE's lambda.
+    for (const auto& row : table) {
+        const int n = row.first;
+        const double expected = row.second;
         CAPTURE(n);
         const double uy = cook_membrane_uy(ElementKind::Q4, n);
         MESSAGE("Q4 " << n << "x" << n << ": " << uy);
