@@ -119,9 +119,25 @@ Assembler::Assembler(const Model& model, const DofMap& map) : map_(&map) {
         pattern_.col_start[static_cast<size_t>(j) + 1] = static_cast<int>(pattern_.row.size());
     }
 
+    // The node of each unknown (a θ dof sits at its rotation node).
+    pattern_.position.resize(static_cast<size_t>(n));
+    for (int u = 0; u < n; ++u) {
+        const int dof = map.dof_of(u);
+        const int node = dof < 2 * model.n_nodes()
+                             ? dof / 2
+                             : model.rotation_nodes[static_cast<size_t>(dof - 2 * model.n_nodes())];
+        pattern_.position[static_cast<size_t>(u)] = model.nodes[static_cast<size_t>(node)];
+    }
+
     // Scatter positions for elements whose dofs are all free unknowns.
     scatter_start_.assign(model.elements.size(), -1);
     std::array<int, 18> dofs{};
+    size_t pairs = 0;
+    for (const Element& el : model.elements) {
+        const auto n_dofs = static_cast<size_t>(2 * node_count(el.kind));
+        pairs += n_dofs * (n_dofs + 1) / 2;
+    }
+    scatter_.reserve(pairs);
     for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
         const int n_dofs = element_dofs(model, e, dofs);
         bool plain = true;
@@ -132,7 +148,8 @@ Assembler::Assembler(const Model& model, const DofMap& map) : map_(&map) {
             for (int a = 0; a <= b; ++a) {
                 const int ua = map.unknown_of(dofs[static_cast<size_t>(a)]);
                 const int ub = map.unknown_of(dofs[static_cast<size_t>(b)]);
-                scatter_.push_back(pattern_.find(std::max(ua, ub), std::min(ua, ub)));
+                scatter_.push_back(
+                    static_cast<int>(pattern_.find(std::max(ua, ub), std::min(ua, ub))));
             }
     }
 }
@@ -171,7 +188,7 @@ void Assembler::assemble(const Model& model, std::vector<double>& values,
         const int n_dofs = element_stiffness(model, e, D[static_cast<size_t>(el.material)], k);
         const long start = scatter_start_[static_cast<size_t>(e)];
         if (start >= 0) {
-            const long* position = scatter_.data() + start;
+            const int* position = scatter_.data() + start;
             for (int b = 0; b < n_dofs; ++b)
                 for (int a = 0; a <= b; ++a) values[static_cast<size_t>(*position++)] += k(a, b);
         } else {

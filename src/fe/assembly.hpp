@@ -19,6 +19,9 @@ struct SparsePattern {
     int n = 0;
     std::vector<int> col_start; // n + 1 entries
     std::vector<int> row;       // nnz entries
+    // Position of each unknown's node (n entries, or none), for orderings
+    // that dissect the mesh geometrically.
+    std::vector<Vector2> position;
     long nnz() const { return static_cast<long>(row.size()); }
     // Position of entry (i, j), i ≥ j, in the value array; -1 when absent.
     long find(int i, int j) const;
@@ -58,8 +61,9 @@ private:
     SparsePattern pattern_;
     // For an element whose dofs are all free: the value positions of its
     // lower-triangle pairs (a ≤ b), consecutively; -1 start for the others.
+    // Positions fit an int: the pattern's column starts are ints.
     std::vector<long> scatter_start_;
-    std::vector<long> scatter_;
+    std::vector<int> scatter_;
 };
 
 } // namespace lapwing::fe

@@ -149,11 +149,13 @@ SprRecovery::SprRecovery(const Model& model, const SampledStresses& samples)
                 A.row(r) =
                     spr_basis(samples.point[static_cast<size_t>(e * per_element_ + q)], origin, h)
                         .head(n_terms);
-        const Eigen::MatrixXd AtA = A.transpose() * A;
-        const Eigen::LDLT<Eigen::MatrixXd> normal(AtA);
+        // At most 6 × 6: storage on the stack, not the heap, per patch.
+        using Small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, 6, 6>;
+        const Small AtA = A.transpose() * A;
+        const Eigen::LDLT<Small> normal(AtA);
         // Reject a patch whose points do not determine the polynomial (e.g.
         // collinear samples): its smallest pivot collapses.
-        const Eigen::VectorXd d = normal.vectorD();
+        const auto& d = normal.vectorD();
         if (normal.info() != Eigen::Success || d.minCoeff() <= 1e-10 * d.maxCoeff()) continue;
         // The fit depends on the mesh only: coefficients = (AᵀA)⁻¹Aᵀ b for
         // the sampled values b of any load case.
@@ -174,7 +176,7 @@ std::vector<Stress> SprRecovery::recover(const SampledStresses& samples) const {
     std::vector<int> n_shared(n_nodes, 0), n_boundary_fit(n_nodes, 0);
 
     Eigen::MatrixXd b;
-    Eigen::MatrixXd coefficients;
+    Eigen::Matrix<double, Eigen::Dynamic, 3, 0, 6, 3> coefficients; // n_terms × 3, no heap
     for (const Patch& patch : patches_) {
         const auto v = static_cast<size_t>(patch.vertex);
         const auto& elements = node_elements_[v];
@@ -185,10 +187,11 @@ std::vector<Stress> SprRecovery::recover(const SampledStresses& samples) const {
                 b.row(r) = samples.stress[static_cast<size_t>(e * per_element + q)].transpose();
         coefficients.noalias() = patch.fit * b; // n_terms × 3
         auto value_at = [&](int node) {
-            return Stress((spr_basis(model.nodes[static_cast<size_t>(node)], patch.origin, patch.h)
-                               .head(patch.n_terms) *
-                           coefficients)
-                              .transpose());
+            const Eigen::Matrix<double, 1, 6> p =
+                spr_basis(model.nodes[static_cast<size_t>(node)], patch.origin, patch.h);
+            Stress value = Stress::Zero();
+            for (int k = 0; k < patch.n_terms; ++k) value += p(k) * coefficients.row(k).transpose();
+            return value;
         };
         if (!patch.boundary) {
             own[v] = value_at(patch.vertex);

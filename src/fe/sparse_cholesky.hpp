@@ -19,8 +19,11 @@ namespace lapwing::fe {
 enum class SolverBackend { cholmod, eigen_ldlt };
 // node_amd: AMD on the graph of groups of consecutive unknowns with the same
 // adjacency (the ux, uy of a node), expanded to the unknowns; a quarter of
-// the edges of the unknowns' graph for plane elements.
-enum class Ordering { automatic, amd, metis, natural, node_amd };
+// the edges of the unknowns' graph for plane elements. nested_dissection:
+// geometric nested dissection of the same node graph from the positions in
+// SparsePattern::position (fe/nested_dissection.hpp), leaves and separators
+// ordered by CAMD; node_amd where the positions are missing.
+enum class Ordering { automatic, amd, metis, natural, node_amd, nested_dissection };
 
 struct SolverOptions {
 #ifdef LAPWING_HAVE_CHOLMOD
