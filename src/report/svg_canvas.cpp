@@ -4,6 +4,7 @@
 #include "report/text_format.hpp"
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <fmt/format.h>
 
@@ -23,7 +24,14 @@ Canvas::Canvas(Eigen::Vector2d lo, Eigen::Vector2d hi, double width_px, double m
 }
 
 std::string Canvas::point(const Eigen::Vector2d& p) const {
-    return fmt::format("{:.1f},{:.1f}", x(p.x()), y(p.y()));
+    // std::to_chars rounds the exact binary value correctly, as "{:.1f}"
+    // does, at a fraction of fmt 9's cost for fixed precision (its big-
+    // decimal path); the figures hold tens of thousands of points.
+    char text[64];
+    char* end = std::to_chars(text, text + 31, x(p.x()), std::chars_format::fixed, 1).ptr;
+    *end++ = ',';
+    end = std::to_chars(end, text + sizeof text, y(p.y()), std::chars_format::fixed, 1).ptr;
+    return std::string(text, end);
 }
 
 std::string Canvas::open(const std::string& title) const {
