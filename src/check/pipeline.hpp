@@ -106,6 +106,9 @@ struct Convergence {
     double largest_change() const; // largest |change()|
 };
 
+// Wall seconds of each stage on its own thread: fine_mesh (the convergence
+// mesh's meshing, solving and measuring) overlaps the others when it runs
+// concurrently.
 struct Timings {
     double mesh = 0, analysis = 0, checks = 0, fine_mesh = 0; // seconds
 };
