@@ -208,6 +208,11 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
 
 Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout,
                 SolverReuse* reuse) {
+    return analyse(c, mesh, layout, reuse, nullptr);
+}
+
+Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout,
+                SolverReuse* reuse, const ContactHooks* hooks) {
     const auto start = std::chrono::steady_clock::now();
     Results results;
     results.problem = build_fe_problem(c, mesh, layout);
@@ -220,11 +225,48 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         specs.push_back({comb.name, true, comb.factors});
 
     fe::Model working = p.model;
+    // Contact: the cases' loads and the order to solve them in, and each
+    // case's seeded start set (empty without one), known before the first
+    // factorization so that it can be made with the first case's start.
+    std::vector<fe::Loads> case_loads;
+    std::vector<size_t> contact_order;
+    std::vector<double> k0(working.link_springs.size());
+    for (size_t j = 0; j < k0.size(); ++j) k0[j] = working.link_springs[j].k;
+    // The seeds mapped onto this mesh, by case (empty: none).
+    std::vector<std::vector<bool>> mapped(specs.size());
+    const auto seeded_start = [&](size_t i) {
+        if (hooks && hooks->seed_for && mapped[i].empty())
+            if (const std::optional<ContactSeed> seed = hooks->seed_for(i))
+                mapped[i] = seeded_active_set(p, *seed);
+        return mapped[i];
+    };
+    std::vector<bool> first_start;
+    if (p.has_contact) {
+        for (const CaseSpec& spec : specs)
+            case_loads.push_back(loads_for(c, mesh, p, spec.factors));
+        contact_order = similar_first_order(working, case_loads);
+        first_start = seeded_start(contact_order.front());
+        for (size_t j = 0; j < k0.size() && !first_start.empty(); ++j)
+            working.link_springs[j].k = first_start[j] ? k0[j] : 0.0;
+    }
     std::optional<fe::LinearStaticProblem> own_solver;
     fe::LinearStaticProblem* solver = nullptr;
-    try {
+    const auto make_solver = [&] {
         solver = reuse ? &reuse->problem_for(working, p.constraints)
                        : &own_solver.emplace(working, p.constraints);
+    };
+    try {
+        try {
+            make_solver();
+        } catch (const AnalysisError&) {
+            // A seeded set that leaves the plate loose: start as without one,
+            // all hole nodes in contact, whose messages are the usual ones.
+            if (first_start.empty()) throw;
+            own_solver.reset();
+            first_start.clear();
+            working.link_springs = p.model.link_springs;
+            make_solver();
+        }
     } catch (const AnalysisError& e) {
         rethrow_in_connection_terms(c, p, e);
     }
@@ -270,18 +312,30 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         // than factorizing again; the settled set's solution is checked by
         // its residual and solved on a fresh factorization when the modified
         // one has lost accuracy.
-        std::vector<double> k0(working.link_springs.size());
-        for (size_t j = 0; j < k0.size(); ++j) k0[j] = working.link_springs[j].k;
+        //
+        // With seeds from another mesh, the first case starts from its mapped
+        // seed. A later case starts from the previous case's settled set on
+        // this mesh, changed where the two cases' seeds differ: the mapping
+        // of a seed can be off by a node at the edges of a contact arc,
+        // which this mesh's own previous set has right.
         std::vector<bool> start_set(k0.size(), true);
-        std::vector<fe::Loads> case_loads;
-        for (const CaseSpec& spec : specs)
-            case_loads.push_back(loads_for(c, mesh, p, spec.factors));
-        for (const size_t i : similar_first_order(working, case_loads)) {
+        size_t previous = contact_order.front();
+        for (const size_t i : contact_order) {
             CaseResult& out = results.cases[i];
             out.name = specs[i].name;
             out.combination = specs[i].combination;
             const fe::Loads& loads = case_loads[i];
             std::vector<bool> active = start_set;
+            if (i == contact_order.front()) {
+                if (!first_start.empty()) active = first_start;
+            } else {
+                const std::vector<bool>& now = seeded_start(i);
+                const std::vector<bool>& before = seeded_start(previous);
+                if (!now.empty() && !before.empty())
+                    for (size_t j = 0; j < active.size(); ++j)
+                        if (now[j] != before[j]) active[j] = now[j];
+            }
+            previous = i;
             std::set<std::vector<bool>> seen;
             bool settled = false;
             for (int iteration = 1; iteration <= max_contact_iterations; ++iteration) {
@@ -330,6 +384,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
             rcond = std::min(rcond, solver->stats().factor.rcond);
             start_set = active;
             out.contact_closed.assign(active.begin(), active.end());
+            if (hooks && hooks->settled) hooks->settled(i, contact_seed(p, active, s.u));
             fill_case(c, p, working, s, specs[i].factors, spr, out);
             check_finite(out);
         }

@@ -4,6 +4,7 @@
 // combination is then solved by its own active-set iteration.
 #pragma once
 
+#include "analysis/contact_seed.hpp"
 #include "analysis/plate_region.hpp"
 #include "analysis/results.hpp"
 #include "analysis/solver_reuse.hpp"
@@ -23,5 +24,14 @@ Results analyse(const model::Connection& connection, const mesh::Mesh& mesh,
 // are those of the overload above. `reuse` may be null.
 Results analyse(const model::Connection& connection, const mesh::Mesh& mesh,
                 const PlateLayout& layout, SolverReuse* reuse);
+
+// The same, exchanging contact seeds through `hooks` (may be null): each
+// settled case is reported, and a case with a seed starts its active-set
+// iteration from the seed mapped onto this mesh (the first case's seed also
+// sets the springs of the first factorization). The settled sets, and so the
+// results to round-off, are those of a start without seeds; only the number
+// of passes changes.
+Results analyse(const model::Connection& connection, const mesh::Mesh& mesh,
+                const PlateLayout& layout, SolverReuse* reuse, const ContactHooks* hooks);
 
 } // namespace lapwing::analysis

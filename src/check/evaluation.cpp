@@ -56,7 +56,7 @@ std::map<std::string, double> case_factors(const model::Connection& c, size_t k)
 }
 
 Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settings,
-                    ReuseCache* cache) {
+                    ReuseCache* cache, const analysis::ContactHooks* contact) {
     Evaluation e;
     auto start = std::chrono::steady_clock::now();
     e.layout = analysis::plate_layout(c);
@@ -67,7 +67,7 @@ Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settin
     e.seconds_mesh = seconds_since(start);
 
     start = std::chrono::steady_clock::now();
-    e.results = analysis::analyse(c, e.mesh, e.layout, slot ? &slot->solver : nullptr);
+    e.results = analysis::analyse(c, e.mesh, e.layout, slot ? &slot->solver : nullptr, contact);
     e.seconds_analysis = seconds_since(start);
 
     start = std::chrono::steady_clock::now();

@@ -3,6 +3,7 @@
 // evaluates the model's mesh and the finer convergence mesh the same way.
 #pragma once
 
+#include "analysis/contact_seed.hpp"
 #include "check/pipeline.hpp"
 #include "check/weld_lines.hpp"
 
@@ -26,9 +27,11 @@ struct Evaluation {
 };
 
 // With a cache (sweeps), the mesh and the solver state come from it when
-// the plate region, settings and topology match an earlier run.
+// the plate region, settings and topology match an earlier run. `contact`
+// passes bearing-contact seeds to or from another evaluation
+// (analysis::analyse); it may be null.
 Evaluation evaluate(const model::Connection& connection, const mesh::MeshSettings& settings,
-                    ReuseCache* cache = nullptr);
+                    ReuseCache* cache = nullptr, const analysis::ContactHooks* contact = nullptr);
 
 // Rows from the stress field: peaks, section stresses, welds.
 std::vector<CheckRow> stress_rows(const model::Connection& connection, const Evaluation& e);

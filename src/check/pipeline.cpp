@@ -10,6 +10,8 @@
 #include <chrono>
 #include <cmath>
 #include <fmt/format.h>
+#include <future>
+#include <thread>
 
 namespace lapwing::check {
 
@@ -106,17 +108,55 @@ void check_resources(const model::Connection& c, bool two_mesh, long max_dofs) {
                               "model's own mesh; --single-mesh skips it)");
 }
 
+bool solves_concurrently(const model::Connection& c, const CheckOptions& options) {
+    if (!options.two_mesh || !options.concurrent || options.cache) return false;
+    if (std::thread::hardware_concurrency() < 2) return false;
+    // Both meshes in memory at once: the model's (about a quarter of the
+    // finer one's) on top of the finer mesh's own peak.
+    const mesh::MeshSettings settings = analysis::mesh_settings(c);
+    const mesh::MeshSettings fine = fine_mesh_settings(analysis::plate_layout(c).region, settings);
+    const double bytes = analysis::estimate_resources(c, settings).bytes +
+                         analysis::estimate_resources(c, fine).bytes;
+    return bytes <= static_cast<double>(analysis::default_max_dofs) * analysis::bytes_per_dof;
+}
+
 CheckOutcome check_connection(const model::Connection& c, const CheckOptions& options) {
     check_resources(c, options.two_mesh, options.max_dofs);
     CheckOutcome out;
     out.connection = c;
-    const auto start = std::chrono::steady_clock::now();
+    const auto seconds_since = [](std::chrono::steady_clock::time_point t) {
+        return std::chrono::duration<double>(std::chrono::steady_clock::now() - t).count();
+    };
     const auto stage = [&](Stage s) {
         if (options.on_stage) options.on_stage(s);
     };
+    const mesh::MeshSettings settings = analysis::mesh_settings(c);
+    // The convergence mesh starts each case's contact iteration from the
+    // model mesh's settled set (fewer passes, the same settled set), in
+    // either order of running.
+    analysis::ContactBoard board(c.load_cases.size() + c.combinations.size());
+    const analysis::ContactHooks publish = board.publisher(), read = board.reader();
+    mesh::MeshSettings fine_settings;
+    if (options.two_mesh)
+        fine_settings = fine_mesh_settings(analysis::plate_layout(c).region, settings);
+    const bool concurrent = solves_concurrently(c, options);
+    // Declared after the board it reads: destroyed (joined) first.
+    std::future<Evaluation> fine_future;
+    if (concurrent)
+        fine_future = std::async(std::launch::async,
+                                 [&] { return evaluate(c, fine_settings, nullptr, &read); });
+
     stage(Stage::model);
-    Evaluation e = evaluate(c, analysis::mesh_settings(c), options.cache);
+    Evaluation e;
+    try {
+        e = evaluate(c, settings, options.cache, options.two_mesh ? &publish : nullptr);
+    } catch (...) {
+        board.finish(); // release the other thread; its outcome is not wanted
+        throw;
+    }
+    board.finish();
     stage(Stage::checks);
+    auto start = std::chrono::steady_clock::now();
     std::vector<CheckRow> rows = stress_rows(c, e);
     std::vector<CheckRow> classical = classical_rows(c, e);
     rows.insert(rows.end(), std::make_move_iterator(classical.begin()),
@@ -124,15 +164,17 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     out.table = make_table(std::move(rows));
     out.seconds.mesh = e.seconds_mesh;
     out.seconds.analysis = e.seconds_analysis;
+    out.seconds.checks = e.seconds_measure + seconds_since(start);
 
     if (options.two_mesh) {
         // Globally refined rather than only near the governing regions: simpler
         // to state, and every row gets its evidence (the cost is about four
         // times the model's own solve).
         stage(Stage::convergence);
-        const mesh::MeshSettings fine_settings = fine_mesh_settings(e.layout.region, e.settings);
-        const Evaluation f = evaluate(c, fine_settings, options.cache);
+        const Evaluation f =
+            concurrent ? fine_future.get() : evaluate(c, fine_settings, options.cache, &read);
         stage(Stage::comparison);
+        start = std::chrono::steady_clock::now();
         Convergence& cv = out.convergence;
         cv.done = true;
         cv.coarse_size = e.element_size;
@@ -149,6 +191,8 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
                     largest = std::max({largest, std::abs(o.coarse), std::abs(o.fine)});
             r.floor = 0.1 * largest;
         }
+        out.seconds.checks += seconds_since(start);
+        // The finer mesh's own time, whether or not it overlapped the above.
         out.seconds.fine_mesh = f.seconds_mesh + f.seconds_analysis + f.seconds_measure;
     }
     out.layout = std::move(e.layout);
@@ -160,9 +204,6 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     out.welds = std::move(e.welds);
     out.weld_forces = std::move(e.weld_forces);
     out.element_size = e.element_size;
-    out.seconds.checks =
-        std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count() -
-        out.seconds.mesh - out.seconds.analysis - out.seconds.fine_mesh;
     return out;
 }
 

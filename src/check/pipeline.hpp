@@ -45,6 +45,14 @@ struct CheckOptions {
     // itself prints nothing; cli/ turns these into the terminal's progress
     // line.
     std::function<void(Stage)> on_stage;
+    // With two_mesh, solve the convergence mesh on a second thread while the
+    // model's mesh is solved and checked. The results are those of the
+    // sequential order, bit for bit: the convergence mesh starts each load
+    // case's contact iteration from the model mesh's settled set in either
+    // order (analysis::ContactBoard). Used only without a cache, on a
+    // machine with two or more cores, and when both meshes' estimated memory
+    // fits the budget the default dof limit stands for.
+    bool concurrent = true;
     // Refuse, before meshing, a model whose mesh (or, with two_mesh, whose
     // finer convergence mesh) is estimated above this many dofs.
     long max_dofs = analysis::default_max_dofs;
@@ -98,6 +106,9 @@ struct Convergence {
     double largest_change() const; // largest |change()|
 };
 
+// Wall seconds of each stage on its own thread: fine_mesh (the convergence
+// mesh's meshing, solving and measuring) overlaps the others when it runs
+// concurrently.
 struct Timings {
     double mesh = 0, analysis = 0, checks = 0, fine_mesh = 0; // seconds
 };
@@ -123,6 +134,10 @@ struct CheckOutcome {
 // uses everywhere, twice the elements round each hole.
 mesh::MeshSettings fine_mesh_settings(const geometry::PlateRegion& region,
                                       const mesh::MeshSettings& settings);
+
+// Whether check_connection solves the two meshes concurrently (see
+// CheckOptions::concurrent).
+bool solves_concurrently(const model::Connection& connection, const CheckOptions& options);
 
 // The resource guard of a check, before anything is meshed: the model's
 // mesh and, when `two_mesh`, the finer convergence mesh (about four times

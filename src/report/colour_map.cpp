@@ -36,7 +36,18 @@ Rgb viridis(double t) {
 }
 
 std::string hex(Rgb colour) {
-    return fmt::format("#{:02x}{:02x}{:02x}", colour.r, colour.g, colour.b);
+    // "#{:02x}{:02x}{:02x}" by hand: one per contour cell.
+    const auto byte = [](int v) { return v >= 0 && v <= 255; };
+    if (!byte(colour.r) || !byte(colour.g) || !byte(colour.b))
+        return fmt::format("#{:02x}{:02x}{:02x}", colour.r, colour.g, colour.b);
+    static constexpr char digits[] = "0123456789abcdef";
+    std::string s(7, '#');
+    int k = 1;
+    for (const unsigned v : {unsigned(colour.r), unsigned(colour.g), unsigned(colour.b)}) {
+        s[static_cast<size_t>(k++)] = digits[(v >> 4) & 15];
+        s[static_cast<size_t>(k++)] = digits[v & 15];
+    }
+    return s;
 }
 
 } // namespace lapwing::report

@@ -60,9 +60,9 @@ std::string contour_svg(const check::CheckOutcome& o, int case_index) {
     // per load case). The map keeps the output order fixed (--reproducible).
     std::map<std::string, std::string> cells_by_colour;
     const auto cell = [&](const std::array<Eigen::Vector2d, 4>& p, double value) {
-        cells_by_colour[hex(viridis(value / range))] +=
-            fmt::format("M{}L{}L{}L{}Z", canvas.point(p[0]), canvas.point(p[1]), canvas.point(p[2]),
-                        canvas.point(p[3]));
+        std::string& d = cells_by_colour[hex(viridis(value / range))];
+        for (int k = 0; k < 4; ++k) d.append(k == 0 ? "M" : "L").append(canvas.point(p[k]));
+        d.push_back('Z');
     };
     for (int e = 0; e < mesh.n_elements(); ++e) {
         const auto el = mesh.element(e);

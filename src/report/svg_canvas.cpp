@@ -4,6 +4,7 @@
 #include "report/text_format.hpp"
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <fmt/format.h>
 
@@ -22,8 +23,47 @@ Canvas::Canvas(Eigen::Vector2d lo, Eigen::Vector2d hi, double width_px, double m
     height_ = std::ceil(span_y * scale_ + 2 * margin_px);
 }
 
+void append_fixed1(std::string& out, double v) {
+    // Beyond 2^50 tenths, or not finite: the general formatter.
+    if (!(std::abs(v) < 1e14)) {
+        char text[400];
+        out.append(text,
+                   std::to_chars(text, text + sizeof text, v, std::chars_format::fixed, 1).ptr);
+        return;
+    }
+    // 10 v rounded to an integer, from p = fl(10 v) and its exact error e
+    // (p + e = 10 v exactly): round-to-nearest cannot carry p across a
+    // half-integer, which is representable here, so only p on a half
+    // needs e (and a true tie goes to even).
+    const double p = 10 * v, e = std::fma(v, 10, -p);
+    const double f = std::floor(p);
+    double n;
+    if (p - f == 0.5)
+        n = e > 0 ? f + 1 : e < 0 ? f : (std::fmod(f, 2) == 0 ? f : f + 1);
+    else
+        n = std::nearbyint(p);
+    const auto tenths = static_cast<long long>(std::abs(n));
+    char text[24];
+    char* end = text + sizeof text;
+    char* at = end;
+    *--at = static_cast<char>('0' + tenths % 10);
+    *--at = '.';
+    long long whole = tenths / 10;
+    do {
+        *--at = static_cast<char>('0' + whole % 10);
+        whole /= 10;
+    } while (whole > 0);
+    if (std::signbit(v)) *--at = '-';
+    out.append(at, end);
+}
+
 std::string Canvas::point(const Eigen::Vector2d& p) const {
-    return fmt::format("{:.1f},{:.1f}", x(p.x()), y(p.y()));
+    std::string s;
+    s.reserve(24);
+    append_fixed1(s, x(p.x()));
+    s.push_back(',');
+    append_fixed1(s, y(p.y()));
+    return s;
 }
 
 std::string Canvas::open(const std::string& title) const {

@@ -10,6 +10,12 @@
 
 namespace lapwing::report {
 
+// Appends `v` as "{:.1f}" would (fmt, printf: the exact binary value
+// rounded to one decimal, ties to even, "-0.0" for a negative value that
+// rounds to zero), in a few dozen instructions rather than the several
+// hundred of a general fixed-precision formatter; figures hold ~10⁶ numbers.
+void append_fixed1(std::string& out, double v);
+
 class Canvas {
 public:
     // Fits the box [lo, hi] (mm) into `width_px`, leaving `margin_px` round it

@@ -9,6 +9,7 @@
 #include <doctest/doctest.h>
 #include <fstream>
 #include <sstream>
+#include <thread>
 
 using namespace lapwing;
 
@@ -30,9 +31,9 @@ TEST_CASE("check pipeline: every family of the web splice, and convergence of bo
     const check::CheckOutcome o = check::check_connection(c, {});
     REQUIRE(o.convergence.done);
     CHECK(o.convergence.fine_elements > 2 * o.convergence.coarse_elements);
-    for (const check::Family f : {check::Family::peak_stress, check::Family::section,
-                                  check::Family::bearing, check::Family::block_shear,
-                                  check::Family::net_section})
+    for (const check::Family f :
+         {check::Family::peak_stress, check::Family::section, check::Family::bearing,
+          check::Family::block_shear, check::Family::net_section})
         CHECK_MESSAGE(o.table.governing_in(f) >= 0, check::word(f));
     for (const check::CheckRow& r : o.table.rows) {
         CHECK(std::isfinite(r.demand));
@@ -77,4 +78,54 @@ TEST_CASE("check pipeline: the stage callback sees every stage once, in the orde
     options.two_mesh = false;
     check::check_connection(c, options);
     CHECK(seen == std::vector<check::Stage>{check::Stage::model, check::Stage::checks});
+}
+
+TEST_CASE("check pipeline: the concurrent convergence mesh gives the sequential results bit for "
+          "bit, and the stage callback stays on the calling thread") {
+    // The two orders run the same arithmetic (each case's contact start on
+    // the finer mesh comes from the model mesh's settled set either way), so
+    // equality is exact, not to a tolerance.
+    const model::Connection c = load_template("truss-gusset.toml", {"mesh.size=24"});
+    check::CheckOptions options;
+    options.concurrent = false;
+    const check::CheckOutcome sequential = check::check_connection(c, options);
+    options.concurrent = true;
+    const std::thread::id caller = std::this_thread::get_id();
+    bool on_caller = true;
+    options.on_stage = [&](check::Stage) {
+        on_caller = on_caller && std::this_thread::get_id() == caller;
+    };
+    REQUIRE(check::solves_concurrently(c, options) == (std::thread::hardware_concurrency() >= 2));
+    const check::CheckOutcome concurrent = check::check_connection(c, options);
+    CHECK(on_caller);
+    REQUIRE(sequential.results.problem.has_contact);
+    REQUIRE(sequential.convergence.done);
+    REQUIRE(concurrent.convergence.rows.size() == sequential.convergence.rows.size());
+    for (size_t k = 0; k < sequential.convergence.rows.size(); ++k) {
+        const check::ConvergenceRow& a = sequential.convergence.rows[k];
+        const check::ConvergenceRow& b = concurrent.convergence.rows[k];
+        CAPTURE(a.quantity);
+        CHECK(a.coarse == b.coarse);
+        CHECK(a.fine == b.fine);
+    }
+    CHECK(concurrent.convergence.fine_dofs == sequential.convergence.fine_dofs);
+    REQUIRE(concurrent.results.cases.size() == sequential.results.cases.size());
+    for (size_t i = 0; i < sequential.results.cases.size(); ++i) {
+        CHECK(concurrent.results.cases[i].u == sequential.results.cases[i].u);
+        CHECK(concurrent.results.cases[i].contact_iterations ==
+              sequential.results.cases[i].contact_iterations);
+    }
+    REQUIRE(concurrent.table.rows.size() == sequential.table.rows.size());
+    for (size_t k = 0; k < sequential.table.rows.size(); ++k)
+        CHECK(concurrent.table.rows[k].ratio == sequential.table.rows[k].ratio);
+}
+
+TEST_CASE("check pipeline: no concurrency with a sweep's cache or without the convergence mesh") {
+    const model::Connection c = load_template("truss-gusset.toml", {"mesh.size=24"});
+    check::CheckOptions options;
+    options.two_mesh = false;
+    CHECK(!check::solves_concurrently(c, options));
+    options.two_mesh = true;
+    options.concurrent = false;
+    CHECK(!check::solves_concurrently(c, options));
 }

@@ -3,9 +3,12 @@
 // that makes it perceptually ordered: lightness rises monotonically from
 // one end to the other (CIE L* from sRGB, IEC 61966-2-1 and CIE 15:2004).
 #include "report/colour_map.hpp"
+#include "report/svg_canvas.hpp"
 
 #include <cmath>
 #include <doctest/doctest.h>
+#include <fmt/format.h>
+#include <vector>
 
 using namespace lapwing::report;
 
@@ -41,4 +44,20 @@ TEST_CASE("colour map: lightness rises monotonically") {
     // colours, computed by the function above from their sRGB values).
     CHECK(lightness(viridis(0)) < 20);
     CHECK(lightness(viridis(1)) > 85);
+}
+
+TEST_CASE("svg numbers: append_fixed1 writes what fmt's {:.1f} writes") {
+    // Reference: fmt's own "{:.1f}" (correctly rounded from the exact binary
+    // value, ties to even, as printf's %.1f) on ties, near-ties, signs and
+    // a sweep of ordinary pixel coordinates.
+    std::vector<double> values = {0.0,  -0.0,  0.25,   0.35,    -0.25, 0.05,   -0.05, 0.15,
+                                  2.5,  1.45,  -1.45,  0.95,    9.95,  99.95,  -0.04, 1e13,
+                                  1e15, -1e16, 123.45, 760.049, 0.049, -0.051, 5e-324};
+    for (int k = 0; k <= 200000; ++k) values.push_back(-1000.0 + k * 0.01);
+    for (int k = 0; k <= 20000; ++k) values.push_back(k * 0.05), values.push_back(-k * 0.05);
+    for (const double v : values) {
+        std::string mine;
+        lapwing::report::append_fixed1(mine, v);
+        REQUIRE_MESSAGE(mine == fmt::format("{:.1f}", v), v);
+    }
 }
