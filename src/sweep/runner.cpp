@@ -83,6 +83,9 @@ VariantResult Runner::run_one(const Variant& variant, check::ReuseCache* cache) 
         options.two_mesh = options_.two_mesh;
         options.max_dofs = options_.max_dofs;
         options.cache = cache;
+        // With several workers the cores are taken already; a second thread
+        // per variant would only double the memory of each.
+        options.concurrent = options_.threads <= 1;
         const check::CheckOutcome outcome = check::check_connection(c, options);
         out.built = true;
         summarise(outcome.table, out);
