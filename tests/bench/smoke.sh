@@ -16,11 +16,12 @@ else
   cmake --preset bench > /dev/null
 fi
 cmake --build "$build" -j2 --target bench_fe_solve bench_fe_elements bench_fe_calculix \
-    mesh_bench bench_analysis
+    mesh_bench bench_analysis bench_contact_start
 bin="$build/tests/bench"
 "$bin/fe/bench_fe_solve" --smoke
 "$bin/fe/bench_fe_elements" --smoke
 "$bin/fe/bench_fe_calculix" --smoke --dir "$build/smoke-calculix"
 "$bin/mesh/mesh_bench" 1 small
 "$bin/analysis/bench_analysis" --smoke
+"$bin/analysis/bench_contact_start" --smoke
 echo "bench smoke: every benchmark built and ran"
