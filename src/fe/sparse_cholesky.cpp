@@ -181,6 +181,8 @@ public:
             break;
         case Ordering::node_amd:
         case Ordering::nested_dissection:
+        case Ordering::node_metis:
+        case Ordering::node_best:
             common_.nmethods = 1;
             common_.method[0].ordering = CHOLMOD_GIVEN;
             common_.postorder = 1;
@@ -203,13 +205,10 @@ public:
         A.xtype = CHOLMOD_PATTERN;
         if (factor_) cholmod_free_factor(&factor_, &common_);
         if (symbolic_) cholmod_free_factor(&symbolic_, &common_);
-        // Nested dissection needs a position for every unknown; without
-        // them it falls back to AMD on the nodes.
-        const bool dissect = ordering_ == Ordering::nested_dissection &&
-                             pattern.position.size() == static_cast<size_t>(pattern.n);
-        if (ordering_ == Ordering::node_amd || ordering_ == Ordering::nested_dissection) {
-            std::vector<int> perm = node_permutation(pattern, dissect);
-            factor_ = cholmod_analyze_p(&A, perm.data(), nullptr, 0, &common_);
+        std::string node_ordering;
+        if (on_nodes()) {
+            NodeGraph graph(pattern);
+            node_ordering = analyse_on_nodes(A, graph, pattern);
         } else {
             factor_ = cholmod_analyze(&A, &common_);
         }
@@ -228,12 +227,9 @@ public:
         static constexpr const char* names[] = {
             "natural", "given", "AMD", "METIS", "nested dissection", "COLAMD", "postordered"};
         const int o = factor_->ordering;
-        stats_.ordering =
-            dissect ? "nested dissection on nodes"
-            : ordering_ == Ordering::node_amd || ordering_ == Ordering::nested_dissection
-                ? "AMD on nodes"
-            : (o >= 0 && o <= 6) ? names[o]
-                                 : "?";
+        stats_.ordering = !node_ordering.empty() ? node_ordering
+                          : (o >= 0 && o <= 6)   ? names[o]
+                                                 : "?";
     }
     void factorize(const SparsePattern& pattern, std::span<const double> values) override {
         // A modified factor is simplicial LDLᵀ: start again from the kept
@@ -329,53 +325,135 @@ public:
     }
 
 private:
-    // The node AMD and nested dissection orderings: the group graph ordered
-    // (with CAMD under the dissection's constraint sets, or AMD), each
-    // group's unknowns listed in turn.
-    std::vector<int> node_permutation(const SparsePattern& p, bool dissect) {
-        const UnknownGroups groups = group_unknowns(p);
-        const int n_groups = groups.graph.n;
-        // The lower triangle of the groups' graph for CHOLMOD (stype -1).
+    bool on_nodes() const {
+        return ordering_ == Ordering::node_amd || ordering_ == Ordering::nested_dissection ||
+               ordering_ == Ordering::node_metis || ordering_ == Ordering::node_best;
+    }
+
+    // The groups of unknowns (fe: a node's ux, uy) and the lower triangle of
+    // their graph, as CHOLMOD takes it (stype -1).
+    struct NodeGraph {
+        UnknownGroups groups;
         std::vector<int> gp{0}, gi;
-        gi.reserve(groups.graph.adj.size() / 2);
-        for (int g = 0; g < n_groups; ++g) {
-            for (int k = groups.graph.start[static_cast<size_t>(g)];
-                 k < groups.graph.start[static_cast<size_t>(g) + 1]; ++k)
-                if (const int h = groups.graph.adj[static_cast<size_t>(k)]; h > g) gi.push_back(h);
-            gp.push_back(static_cast<int>(gi.size()));
-        }
         cholmod_sparse G{};
-        G.nrow = G.ncol = static_cast<size_t>(n_groups);
-        G.nzmax = gi.size();
-        G.p = gp.data();
-        G.i = gi.data();
-        G.stype = -1;
-        G.itype = CHOLMOD_INT;
-        G.xtype = CHOLMOD_PATTERN;
-        G.dtype = CHOLMOD_DOUBLE;
-        G.sorted = 1;
-        G.packed = 1;
+
+        explicit NodeGraph(const SparsePattern& p) : groups(group_unknowns(p)) {
+            const int n_groups = groups.graph.n;
+            gi.reserve(groups.graph.adj.size() / 2);
+            for (int g = 0; g < n_groups; ++g) {
+                for (int k = groups.graph.start[static_cast<size_t>(g)];
+                     k < groups.graph.start[static_cast<size_t>(g) + 1]; ++k)
+                    if (const int h = groups.graph.adj[static_cast<size_t>(k)]; h > g)
+                        gi.push_back(h);
+                gp.push_back(static_cast<int>(gi.size()));
+            }
+            G.nrow = G.ncol = static_cast<size_t>(n_groups);
+            G.nzmax = gi.size();
+            G.p = gp.data();
+            G.i = gi.data();
+            G.stype = -1;
+            G.itype = CHOLMOD_INT;
+            G.xtype = CHOLMOD_PATTERN;
+            G.dtype = CHOLMOD_DOUBLE;
+            G.sorted = 1;
+            G.packed = 1;
+        }
+        NodeGraph(const NodeGraph&) = delete;
+        NodeGraph& operator=(const NodeGraph&) = delete;
+
+        // A permutation of the groups, expanded to their unknowns in turn.
+        std::vector<int> expand(const std::vector<int>& group_perm, int n) const {
+            std::vector<int> perm;
+            perm.reserve(static_cast<size_t>(n));
+            for (const int g : group_perm)
+                for (int j = groups.start[static_cast<size_t>(g)];
+                     j < groups.start[static_cast<size_t>(g) + 1]; ++j)
+                    perm.push_back(j);
+            return perm;
+        }
+    };
+
+    enum class NodeMethod { amd, coordinates, metis };
+
+    // The node graph ordered by AMD, by CAMD under the geometric
+    // dissection's constraint sets, or by METIS.
+    std::vector<int> node_permutation(NodeGraph& graph, const SparsePattern& p, NodeMethod method) {
+        const int n_groups = graph.groups.graph.n;
         std::vector<int> group_perm(static_cast<size_t>(n_groups));
-        if (dissect) {
+        switch (method) {
+        case NodeMethod::coordinates: {
             std::vector<Vector2> xy(static_cast<size_t>(n_groups));
             for (int g = 0; g < n_groups; ++g)
                 xy[static_cast<size_t>(g)] =
-                    p.position[static_cast<size_t>(groups.start[static_cast<size_t>(g)])];
-            std::vector<int> sets = coordinate_dissection_sets(groups.graph, xy, dissection_leaf);
-            if (!cholmod_camd(&G, nullptr, 0, sets.data(), group_perm.data(), &common_))
+                    p.position[static_cast<size_t>(graph.groups.start[static_cast<size_t>(g)])];
+            std::vector<int> sets =
+                coordinate_dissection_sets(graph.groups.graph, xy, dissection_leaf);
+            if (!cholmod_camd(&graph.G, nullptr, 0, sets.data(), group_perm.data(), &common_))
                 throw std::runtime_error(fmt::format(
                     "CHOLMOD's CAMD failed on the node graph (status {})", common_.status));
-        } else if (!cholmod_amd(&G, nullptr, 0, group_perm.data(), &common_)) {
-            throw std::runtime_error(
-                fmt::format("CHOLMOD's AMD failed on the node graph (status {})", common_.status));
+            break;
         }
-        std::vector<int> perm;
-        perm.reserve(static_cast<size_t>(p.n));
-        for (const int g : group_perm)
-            for (int j = groups.start[static_cast<size_t>(g)];
-                 j < groups.start[static_cast<size_t>(g) + 1]; ++j)
-                perm.push_back(j);
-        return perm;
+        case NodeMethod::metis:
+            // No postorder here: cholmod_analyze_p postorders the unknowns.
+            if (!cholmod_metis(&graph.G, nullptr, 0, 0, group_perm.data(), &common_))
+                throw std::runtime_error(fmt::format(
+                    "CHOLMOD's METIS failed on the node graph (status {})", common_.status));
+            break;
+        case NodeMethod::amd:
+            if (!cholmod_amd(&graph.G, nullptr, 0, group_perm.data(), &common_))
+                throw std::runtime_error(fmt::format(
+                    "CHOLMOD's AMD failed on the node graph (status {})", common_.status));
+            break;
+        }
+        return graph.expand(group_perm, p.n);
+    }
+
+    cholmod_factor* analyse_given(cholmod_sparse& A, std::vector<int>& perm) {
+        cholmod_factor* f = cholmod_analyze_p(&A, perm.data(), nullptr, 0, &common_);
+        if (!f)
+            throw std::runtime_error(
+                fmt::format("CHOLMOD analysis failed (status {})", common_.status));
+        return f;
+    }
+
+    // Sets factor_ from an ordering of the node graph; returns its name.
+    std::string analyse_on_nodes(cholmod_sparse& A, NodeGraph& graph, const SparsePattern& p) {
+        if (ordering_ == Ordering::nested_dissection) {
+            // Nested dissection needs a position for every unknown; without
+            // them it falls back to AMD on the nodes.
+            const bool dissect = p.position.size() == static_cast<size_t>(p.n);
+            std::vector<int> perm =
+                node_permutation(graph, p, dissect ? NodeMethod::coordinates : NodeMethod::amd);
+            factor_ = analyse_given(A, perm);
+            return dissect ? "nested dissection on nodes" : "AMD on nodes";
+        }
+        if (ordering_ == Ordering::node_metis) {
+            std::vector<int> perm = node_permutation(graph, p, NodeMethod::metis);
+            factor_ = analyse_given(A, perm);
+            return "METIS on nodes";
+        }
+        std::vector<int> perm = node_permutation(graph, p, NodeMethod::amd);
+        factor_ = analyse_given(A, perm);
+        if (ordering_ == Ordering::node_amd) return "AMD on nodes";
+        // node_best. CHOLMOD's default strategy keeps AMD when its
+        // factorization takes fewer than 500 flops per entry of L (or L has
+        // fewer than 5 entries per entry of A): then a nested dissection
+        // could save little against the time it takes to compute.
+        const double fl_amd = common_.fl, lnz_amd = common_.lnz;
+        if (fl_amd < poor_fill_flops_per_entry * lnz_amd ||
+            lnz_amd < poor_fill_entries_ratio * static_cast<double>(p.nnz()))
+            return "AMD on nodes";
+        std::vector<int> perm_metis = node_permutation(graph, p, NodeMethod::metis);
+        cholmod_factor* metis = analyse_given(A, perm_metis);
+        if (common_.fl < fl_amd) {
+            cholmod_free_factor(&factor_, &common_);
+            factor_ = metis;
+            return "METIS on nodes (AMD's fill poor)";
+        }
+        cholmod_free_factor(&metis, &common_);
+        common_.fl = fl_amd;
+        common_.lnz = lnz_amd;
+        return "AMD on nodes (METIS tried)";
     }
 
     static cholmod_sparse view(const SparsePattern& p, std::span<const double> values) {
@@ -397,6 +475,11 @@ private:
     // Parts of at most this many nodes are left to CAMD undivided (the best
     // of 32 to 25 000 on the benchmark plate at 10⁵ dofs, tests/bench/fe).
     static constexpr int dissection_leaf = 128;
+    // CHOLMOD's defaults for trying another ordering after AMD (the
+    // cholmod_common fields method[0].fl_ratio... are documented in the
+    // CHOLMOD user guide, "Common->nmethods = 0").
+    static constexpr double poor_fill_flops_per_entry = 500;
+    static constexpr double poor_fill_entries_ratio = 5;
     Ordering ordering_;
     mutable cholmod_common common_{};
     cholmod_factor* factor_ = nullptr;

@@ -22,8 +22,21 @@ enum class SolverBackend { cholmod, eigen_ldlt };
 // the edges of the unknowns' graph for plane elements. nested_dissection:
 // geometric nested dissection of the same node graph from the positions in
 // SparsePattern::position (fe/nested_dissection.hpp), leaves and separators
-// ordered by CAMD; node_amd where the positions are missing.
-enum class Ordering { automatic, amd, metis, natural, node_amd, nested_dissection };
+// ordered by CAMD; node_amd where the positions are missing. node_metis:
+// METIS's multilevel nested dissection (Karypis & Kumar 1998, SIAM J. Sci.
+// Comput. 20:359–392) of the node graph. node_best: AMD on the nodes, and
+// where that fill is poor (CHOLMOD's own test: flops ≥ 500 nnz(L)) METIS on
+// the nodes as well, keeping the one with fewer flops.
+enum class Ordering {
+    automatic,
+    amd,
+    metis,
+    natural,
+    node_amd,
+    nested_dissection,
+    node_metis,
+    node_best
+};
 
 struct SolverOptions {
 #ifdef LAPWING_HAVE_CHOLMOD

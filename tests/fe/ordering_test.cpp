@@ -175,3 +175,47 @@ TEST_CASE("nested dissection on a Q8 mesh matches AMD; without positions it fall
     const Eigen::VectorXd x1 = with->solve(b), x2 = without->solve(b);
     CHECK((x1 - x2).norm() <= 1e-10 * x2.norm());
 }
+
+TEST_CASE("METIS on the node graph: the same solution as AMD, fill under George's bound; "
+          "node_best keeps AMD where its fill is not poor") {
+    // The same grid and patch test as above (George 1973 for the bound).
+    const int k = 120;
+    const Model m = square(ElementKind::Q4, k);
+    Constraints c;
+    for (int i = 0; i < m.n_nodes(); ++i)
+        if (m.nodes[static_cast<size_t>(i)].x() == 0.0) {
+            c.prescribed.push_back({dof_ux(i), 0});
+            if (m.nodes[static_cast<size_t>(i)].y() == 0.0) c.prescribed.push_back({dof_uy(i), 0});
+        }
+    const auto grid = make_structured_grid(ElementKind::Q4, k, k,
+                                           bilinear_map({0, 0}, {100, 0}, {100, 100}, {0, 100}));
+    Loads loads;
+    const double sigma = 50.0;
+    for (const auto& e : grid.side_edges[1])
+        loads.edges.push_back({e.element, e.edge, TractionFrame::global, {sigma, 0}, {sigma, 0}});
+
+    SolverOptions amd, node_amd, metis, best;
+    amd.ordering = Ordering::amd;
+    node_amd.ordering = Ordering::node_amd;
+    metis.ordering = Ordering::node_metis;
+    best.ordering = Ordering::node_best;
+    const LinearStaticProblem pa(m, c, amd), pna(m, c, node_amd), pm(m, c, metis), pb(m, c, best);
+    CHECK(pm.stats().factor.ordering == "METIS on nodes");
+    const double nodes_a_side = k + 1;
+    CHECK(pm.stats().factor.nnz_L <= 31 * nodes_a_side * nodes_a_side * std::log2(nodes_a_side));
+    MESSAGE("nnz(L): AMD " << pa.stats().factor.nnz_L << ", METIS on nodes "
+                           << pm.stats().factor.nnz_L);
+
+    const Solution sa = pa.solve(loads), sm = pm.solve(loads);
+    CHECK((sm.u - sa.u).norm() <= 1e-10 * sa.u.norm());
+    for (int i = 0; i < m.n_nodes(); ++i) {
+        const double expected = sigma * m.nodes[static_cast<size_t>(i)].x() / 200000.0;
+        CHECK(std::abs(sm.u(dof_ux(i)) - expected) <= 1e-10 * sigma * 100 / 200000.0);
+    }
+
+    // CHOLMOD's poor-fill test (flops ≥ 500 nnz(L)) fails on so small a
+    // grid (flops / nnz(L) is a few tens here): node_best is AMD on nodes.
+    CHECK(pna.stats().factor.flops < 500 * pna.stats().factor.nnz_L);
+    CHECK(pb.stats().factor.ordering == "AMD on nodes");
+    CHECK(pb.stats().factor.nnz_L == pna.stats().factor.nnz_L);
+}

@@ -70,8 +70,11 @@ fe::Ordering parse_ordering(const std::string& s) {
     if (s == "automatic") return fe::Ordering::automatic;
     if (s == "node-amd") return fe::Ordering::node_amd;
     if (s == "nd") return fe::Ordering::nested_dissection;
-    throw std::invalid_argument("--ordering " + s +
-                                ": expected amd, node-amd, nd, metis or automatic");
+    if (s == "node-metis") return fe::Ordering::node_metis;
+    if (s == "node-best") return fe::Ordering::node_best;
+    throw std::invalid_argument(
+        "--ordering " + s +
+        ": expected amd, node-amd, node-metis, node-best, nd, metis or automatic");
 }
 
 long parse_count(const std::string& flag, const std::string& s) {
@@ -112,10 +115,11 @@ Options parse(int argc, char** argv) {
         else if (arg == "--no-problem-path")
             o.problem_path = false;
         else
-            throw std::invalid_argument("unknown argument " + arg +
-                                        " (use --smoke | --kind K --dofs N [--repeats N] "
-                                        "[--ordering amd|node-amd|nd|metis|automatic]"
-                                        " [--eigen-max-dofs N | --no-eigen] [--no-problem-path])");
+            throw std::invalid_argument(
+                "unknown argument " + arg +
+                " (use --smoke | --kind K --dofs N [--repeats N] "
+                "[--ordering amd|node-amd|node-metis|node-best|nd|metis|automatic]"
+                " [--eigen-max-dofs N | --no-eigen] [--no-problem-path])");
     }
     return o;
 }
@@ -178,6 +182,7 @@ void run_once(const Options& o, const PlateModel& plate, bool reference_first, R
     r.stage("analyse", measure([&] { cholesky->analyse(pattern); }));
     r.stage("factorize", measure([&] { cholesky->factorize(pattern, values); }));
     const fe::FactorStats fs = cholesky->stats();
+    std::cout << fmt::format("# lapwing's ordering: {}\n", fs.ordering);
     r.set("nnz_A", fs.nnz_A);
     r.set("nnz_L", fs.nnz_L);
     r.set("flops", fs.flops);
