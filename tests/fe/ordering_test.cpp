@@ -72,6 +72,29 @@ Model square(ElementKind kind, int k) {
     return model_from_grid(grid, {200000.0, 0.3}, 5.0);
 }
 
+// A k × k Q4 square on rollers along x = 0 (one pin) under uniaxial tension
+// σ on x = 100: ux = σ x / E exactly for bilinear elements (a patch test).
+struct PatchTest {
+    Model model;
+    Constraints constraints;
+    Loads loads;
+};
+
+PatchTest tension_patch_test(int k, double sigma) {
+    PatchTest t{square(ElementKind::Q4, k), {}, {}};
+    for (int i = 0; i < t.model.n_nodes(); ++i)
+        if (t.model.nodes[static_cast<size_t>(i)].x() == 0.0) {
+            t.constraints.prescribed.push_back({dof_ux(i), 0});
+            if (t.model.nodes[static_cast<size_t>(i)].y() == 0.0)
+                t.constraints.prescribed.push_back({dof_uy(i), 0});
+        }
+    const auto grid = make_structured_grid(ElementKind::Q4, k, k,
+                                           bilinear_map({0, 0}, {100, 0}, {100, 100}, {0, 100}));
+    for (const auto& e : grid.side_edges[1])
+        t.loads.edges.push_back({e.element, e.edge, TractionFrame::global, {sigma, 0}, {sigma, 0}});
+    return t;
+}
+
 } // namespace
 
 TEST_CASE("coordinate dissection: the top separator is the middle grid line and halves the grid") {
@@ -106,21 +129,11 @@ TEST_CASE("nested dissection on a k × k Q4 grid: nnz(L) no worse than AMD and u
     // two unknowns a node, each is a 2 × 2 block: at most 4 · 31/4 = 31
     // k² log₂ k, k the nodes a side (the O(k²) term is negative here).
     const int k = 120;
-    const Model m = square(ElementKind::Q4, k);
-    // Rollers on x = 0 and one pin: uniaxial tension σ gives ux = σ x / E
-    // exactly for bilinear elements (a patch test).
-    Constraints c;
-    for (int i = 0; i < m.n_nodes(); ++i)
-        if (m.nodes[static_cast<size_t>(i)].x() == 0.0) {
-            c.prescribed.push_back({dof_ux(i), 0});
-            if (m.nodes[static_cast<size_t>(i)].y() == 0.0) c.prescribed.push_back({dof_uy(i), 0});
-        }
-    const auto grid = make_structured_grid(ElementKind::Q4, k, k,
-                                           bilinear_map({0, 0}, {100, 0}, {100, 100}, {0, 100}));
-    Loads loads;
     const double sigma = 50.0;
-    for (const auto& e : grid.side_edges[1])
-        loads.edges.push_back({e.element, e.edge, TractionFrame::global, {sigma, 0}, {sigma, 0}});
+    const PatchTest t = tension_patch_test(k, sigma);
+    const Model& m = t.model;
+    const Constraints& c = t.constraints;
+    const Loads& loads = t.loads;
 
     SolverOptions amd, nd;
     amd.ordering = Ordering::amd;
@@ -180,19 +193,11 @@ TEST_CASE("METIS on the node graph: the same solution as AMD, fill under George'
           "node_best keeps AMD where its fill is not poor") {
     // The same grid and patch test as above (George 1973 for the bound).
     const int k = 120;
-    const Model m = square(ElementKind::Q4, k);
-    Constraints c;
-    for (int i = 0; i < m.n_nodes(); ++i)
-        if (m.nodes[static_cast<size_t>(i)].x() == 0.0) {
-            c.prescribed.push_back({dof_ux(i), 0});
-            if (m.nodes[static_cast<size_t>(i)].y() == 0.0) c.prescribed.push_back({dof_uy(i), 0});
-        }
-    const auto grid = make_structured_grid(ElementKind::Q4, k, k,
-                                           bilinear_map({0, 0}, {100, 0}, {100, 100}, {0, 100}));
-    Loads loads;
     const double sigma = 50.0;
-    for (const auto& e : grid.side_edges[1])
-        loads.edges.push_back({e.element, e.edge, TractionFrame::global, {sigma, 0}, {sigma, 0}});
+    const PatchTest t = tension_patch_test(k, sigma);
+    const Model& m = t.model;
+    const Constraints& c = t.constraints;
+    const Loads& loads = t.loads;
 
     SolverOptions amd, node_amd, metis, best;
     amd.ordering = Ordering::amd;
