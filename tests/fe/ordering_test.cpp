@@ -78,10 +78,11 @@ struct PatchTest {
     Model model;
     Constraints constraints;
     Loads loads;
+    double sigma;
 };
 
 PatchTest tension_patch_test(int k, double sigma) {
-    PatchTest t{square(ElementKind::Q4, k), {}, {}};
+    PatchTest t{square(ElementKind::Q4, k), {}, {}, sigma};
     for (int i = 0; i < t.model.n_nodes(); ++i)
         if (t.model.nodes[static_cast<size_t>(i)].x() == 0.0) {
             t.constraints.prescribed.push_back({dof_ux(i), 0});
@@ -93,6 +94,23 @@ PatchTest tension_patch_test(int k, double sigma) {
     for (const auto& e : grid.side_edges[1])
         t.loads.edges.push_back({e.element, e.edge, TractionFrame::global, {sigma, 0}, {sigma, 0}});
     return t;
+}
+
+// The patch test's exact answer, ux = σ x / E at every node, to round-off.
+void check_exact_tension(const PatchTest& t, const Eigen::VectorXd& u) {
+    for (int i = 0; i < t.model.n_nodes(); ++i) {
+        const double expected = t.sigma * t.model.nodes[static_cast<size_t>(i)].x() / 200000.0;
+        CHECK(std::abs(u(dof_ux(i)) - expected) <= 1e-10 * t.sigma * 100 / 200000.0);
+    }
+}
+
+// George (1973), SIAM J. Numer. Anal. 10(2): nested dissection of the
+// k × k 9-point grid gives (31/4) k² log₂ k + O(k²) factor entries. With two
+// unknowns a node, each is a 2 × 2 block: at most 4 · 31/4 = 31 k² log₂ k,
+// k the nodes a side (the O(k²) term is negative here).
+double george_bound(int elements_a_side) {
+    const double nodes_a_side = elements_a_side + 1;
+    return 31 * nodes_a_side * nodes_a_side * std::log2(nodes_a_side);
 }
 
 } // namespace
@@ -124,32 +142,23 @@ TEST_CASE("coordinate dissection: the top separator is the middle grid line and 
 
 TEST_CASE("nested dissection on a k × k Q4 grid: nnz(L) no worse than AMD and under George's "
           "bound; the same solution to round-off") {
-    // George (1973), SIAM J. Numer. Anal. 10(2): nested dissection of the
-    // k × k 9-point grid gives (31/4) k² log₂ k + O(k²) factor entries. With
-    // two unknowns a node, each is a 2 × 2 block: at most 4 · 31/4 = 31
-    // k² log₂ k, k the nodes a side (the O(k²) term is negative here).
+    // George's bound: george_bound above.
     const int k = 120;
-    const double sigma = 50.0;
-    const PatchTest t = tension_patch_test(k, sigma);
+    const PatchTest t = tension_patch_test(k, 50.0);
     const Model& m = t.model;
     const Constraints& c = t.constraints;
-    const Loads& loads = t.loads;
 
     SolverOptions amd, nd;
     amd.ordering = Ordering::amd;
     nd.ordering = Ordering::nested_dissection;
     const LinearStaticProblem pa(m, c, amd), pn(m, c, nd);
     CHECK(pn.stats().factor.ordering == "nested dissection on nodes");
-    const double nodes_a_side = k + 1;
     CHECK(pn.stats().factor.nnz_L <= pa.stats().factor.nnz_L);
-    CHECK(pn.stats().factor.nnz_L <= 31 * nodes_a_side * nodes_a_side * std::log2(nodes_a_side));
+    CHECK(pn.stats().factor.nnz_L <= george_bound(k));
 
-    const Solution sa = pa.solve(loads), sn = pn.solve(loads);
+    const Solution sa = pa.solve(t.loads), sn = pn.solve(t.loads);
     CHECK((sn.u - sa.u).norm() <= 1e-10 * sa.u.norm());
-    for (int i = 0; i < m.n_nodes(); ++i) {
-        const double expected = sigma * m.nodes[static_cast<size_t>(i)].x() / 200000.0;
-        CHECK(std::abs(sn.u(dof_ux(i)) - expected) <= 1e-10 * sigma * 100 / 200000.0);
-    }
+    check_exact_tension(t, sn.u);
 }
 
 TEST_CASE("nested dissection on a Q8 mesh matches AMD; without positions it falls back to AMD "
@@ -193,11 +202,9 @@ TEST_CASE("METIS on the node graph: the same solution as AMD, fill under George'
           "node_best keeps AMD where its fill is not poor") {
     // The same grid and patch test as above (George 1973 for the bound).
     const int k = 120;
-    const double sigma = 50.0;
-    const PatchTest t = tension_patch_test(k, sigma);
+    const PatchTest t = tension_patch_test(k, 50.0);
     const Model& m = t.model;
     const Constraints& c = t.constraints;
-    const Loads& loads = t.loads;
 
     SolverOptions amd, node_amd, metis, best;
     amd.ordering = Ordering::amd;
@@ -206,17 +213,13 @@ TEST_CASE("METIS on the node graph: the same solution as AMD, fill under George'
     best.ordering = Ordering::node_best;
     const LinearStaticProblem pa(m, c, amd), pna(m, c, node_amd), pm(m, c, metis), pb(m, c, best);
     CHECK(pm.stats().factor.ordering == "METIS on nodes");
-    const double nodes_a_side = k + 1;
-    CHECK(pm.stats().factor.nnz_L <= 31 * nodes_a_side * nodes_a_side * std::log2(nodes_a_side));
+    CHECK(pm.stats().factor.nnz_L <= george_bound(k));
     MESSAGE("nnz(L): AMD " << pa.stats().factor.nnz_L << ", METIS on nodes "
                            << pm.stats().factor.nnz_L);
 
-    const Solution sa = pa.solve(loads), sm = pm.solve(loads);
+    const Solution sa = pa.solve(t.loads), sm = pm.solve(t.loads);
     CHECK((sm.u - sa.u).norm() <= 1e-10 * sa.u.norm());
-    for (int i = 0; i < m.n_nodes(); ++i) {
-        const double expected = sigma * m.nodes[static_cast<size_t>(i)].x() / 200000.0;
-        CHECK(std::abs(sm.u(dof_ux(i)) - expected) <= 1e-10 * sigma * 100 / 200000.0);
-    }
+    check_exact_tension(t, sm.u);
 
     // CHOLMOD's poor-fill test (flops ≥ 500 nnz(L)) fails on so small a
     // grid (flops / nnz(L) is a few tens here): node_best is AMD on nodes.
