@@ -38,12 +38,18 @@ std::array<double, 9> extrapolation_weights(int n, double xi, double eta) {
     return w;
 }
 
-std::vector<std::vector<int>> elements_of_nodes(const Model& model) {
-    std::vector<std::vector<int>> out(static_cast<size_t>(model.n_nodes()));
+// The elements around each node, compressed (counting sort by node): the
+// elements of node n are elements[start[n] .. start[n + 1]), in element order.
+void elements_of_nodes(const Model& model, std::vector<int>& start, std::vector<int>& elements) {
+    start.assign(static_cast<size_t>(model.n_nodes()) + 1, 0);
+    for (const Element& el : model.elements)
+        for (int node : nodes_of(el)) ++start[static_cast<size_t>(node) + 1];
+    for (size_t n = 1; n < start.size(); ++n) start[n] += start[n - 1];
+    elements.resize(static_cast<size_t>(start.back()));
+    std::vector<int> next(start.begin(), start.end() - 1);
     for (int e = 0; e < static_cast<int>(model.elements.size()); ++e)
         for (int node : nodes_of(model.elements[static_cast<size_t>(e)]))
-            out[static_cast<size_t>(node)].push_back(e);
-    return out;
+            elements[static_cast<size_t>(next[static_cast<size_t>(node)]++)] = e;
 }
 
 // Corner nodes on the boundary: on a corner-to-corner edge used by one element.
@@ -115,8 +121,8 @@ Eigen::Matrix<double, 1, 6> spr_basis(const Vector2& x, const Vector2& origin, d
 } // namespace
 
 SprRecovery::SprRecovery(const Model& model, const SampledStresses& samples)
-    : model_(&model), per_element_(samples.points_per_element),
-      node_elements_(elements_of_nodes(model)) {
+    : model_(&model), per_element_(samples.points_per_element) {
+    elements_of_nodes(model, element_start_, elements_);
     const auto n_nodes = static_cast<size_t>(model.n_nodes());
     const auto on_boundary = boundary_corners(model);
     std::vector<bool> is_corner(n_nodes, false);
@@ -124,10 +130,11 @@ SprRecovery::SprRecovery(const Model& model, const SampledStresses& samples)
         for (int i = 0; i < 4; ++i)
             is_corner[static_cast<size_t>(el.nodes[static_cast<size_t>(i)])] = true;
 
-    Eigen::MatrixXd A;
+    // At most 6 × 6: storage on the stack, not the heap, per patch.
+    using Small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, 6, 6>;
     for (size_t v = 0; v < n_nodes; ++v) {
-        if (!is_corner[v] || node_elements_[v].empty()) continue;
-        const auto& patch = node_elements_[v];
+        const std::span<const int> patch = elements_of(v);
+        if (!is_corner[v] || patch.empty()) continue;
         const bool quadratic = std::any_of(patch.begin(), patch.end(), [&](int e) {
             return is_quadratic(model.elements[static_cast<size_t>(e)].kind);
         });
@@ -142,25 +149,27 @@ SprRecovery::SprRecovery(const Model& model, const SampledStresses& samples)
                 h = std::max(
                     h, (samples.point[static_cast<size_t>(e * per_element_ + q)] - origin).norm());
         if (h == 0) continue;
-        A.resize(n_points, n_terms);
-        int r = 0;
+        Small AtA = Small::Zero(n_terms, n_terms);
         for (int e : patch)
-            for (int q = 0; q < per_element_; ++q, ++r)
-                A.row(r) =
-                    spr_basis(samples.point[static_cast<size_t>(e * per_element_ + q)], origin, h)
-                        .head(n_terms);
-        // At most 6 × 6: storage on the stack, not the heap, per patch.
-        using Small = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, 6, 6>;
-        const Small AtA = A.transpose() * A;
-        const Eigen::LDLT<Small> normal(AtA);
+            for (int q = 0; q < per_element_; ++q) {
+                const Eigen::Matrix<double, 1, 6> p =
+                    spr_basis(samples.point[static_cast<size_t>(e * per_element_ + q)], origin, h);
+                AtA.noalias() += p.head(n_terms).transpose() * p.head(n_terms);
+            }
         // Reject a patch whose points do not determine the polynomial (e.g.
         // collinear samples): its smallest pivot collapses.
+        const Eigen::LDLT<Small> normal(AtA);
         const auto& d = normal.vectorD();
         if (normal.info() != Eigen::Success || d.minCoeff() <= 1e-10 * d.maxCoeff()) continue;
+        const Eigen::LLT<Small> cholesky(AtA);
+        if (cholesky.info() != Eigen::Success) continue;
         // The fit depends on the mesh only: coefficients = (AᵀA)⁻¹Aᵀ b for
         // the sampled values b of any load case.
         patches_.push_back({static_cast<int>(v), static_cast<bool>(on_boundary[v]), n_terms, origin,
-                            h, normal.solve(A.transpose())});
+                            h, factors_.size()});
+        const Small L = cholesky.matrixL();
+        for (int r = 0; r < n_terms; ++r)
+            for (int c = 0; c <= r; ++c) factors_.push_back(L(r, c));
     }
 }
 
@@ -169,67 +178,77 @@ std::vector<Stress> SprRecovery::recover(const SampledStresses& samples) const {
     const auto n_nodes = static_cast<size_t>(model.n_nodes());
     const int per_element = per_element_;
 
-    // Interior patches' values at nodes (own vertex, or mean over patches).
-    std::vector<Stress> own(n_nodes, Stress::Zero());
-    std::vector<bool> has_own(n_nodes, false);
-    std::vector<Stress> shared(n_nodes, Stress::Zero()), boundary_fit(n_nodes, Stress::Zero());
-    std::vector<int> n_shared(n_nodes, 0), n_boundary_fit(n_nodes, 0);
+    // Each node keeps the values of the best kind of patch that reaches it:
+    // its own interior patch (rank 3), else the mean over the interior
+    // patches that contain it (2), else over the boundary patches (1).
+    std::vector<Stress> sum(n_nodes, Stress::Zero());
+    std::vector<int> count(n_nodes, 0);
+    std::vector<unsigned char> rank(n_nodes, 0);
+    const auto offer = [&](size_t node, unsigned char r, const Stress& value) {
+        if (r > rank[node]) {
+            rank[node] = r;
+            sum[node] = value;
+            count[node] = 1;
+        } else if (r == rank[node] && r < 3) {
+            sum[node] += value;
+            ++count[node];
+        }
+    };
 
-    Eigen::MatrixXd b;
-    Eigen::Matrix<double, Eigen::Dynamic, 3, 0, 6, 3> coefficients; // n_terms × 3, no heap
+    using Coefficients = Eigen::Matrix<double, Eigen::Dynamic, 3, 0, 6, 3>; // n_terms × 3, no heap
+    Coefficients c;
     for (const Patch& patch : patches_) {
         const auto v = static_cast<size_t>(patch.vertex);
-        const auto& elements = node_elements_[v];
-        b.resize(patch.fit.cols(), 3);
-        int r = 0;
+        const std::span<const int> elements = elements_of(v);
+        const int n = patch.n_terms;
+        // Aᵀb, then the two triangular solves with the packed factor.
+        c = Coefficients::Zero(n, 3);
         for (int e : elements)
-            for (int q = 0; q < per_element; ++q, ++r)
-                b.row(r) = samples.stress[static_cast<size_t>(e * per_element + q)].transpose();
-        coefficients.noalias() = patch.fit * b; // n_terms × 3
+            for (int q = 0; q < per_element; ++q) {
+                const auto k = static_cast<size_t>(e * per_element + q);
+                const Eigen::Matrix<double, 1, 6> p =
+                    spr_basis(samples.point[k], patch.origin, patch.h);
+                const Stress& s = samples.stress[k];
+                for (int t = 0; t < n; ++t) c.row(t) += p(t) * s.transpose();
+            }
+        const double* L = factors_.data() + patch.factor;
+        const auto at = [&](int r, int col) { return L[r * (r + 1) / 2 + col]; };
+        for (int r = 0; r < n; ++r) {
+            for (int col = 0; col < r; ++col) c.row(r) -= at(r, col) * c.row(col);
+            c.row(r) /= at(r, r);
+        }
+        for (int r = n - 1; r >= 0; --r) {
+            for (int row = r + 1; row < n; ++row) c.row(r) -= at(row, r) * c.row(row);
+            c.row(r) /= at(r, r);
+        }
         auto value_at = [&](int node) {
             const Eigen::Matrix<double, 1, 6> p =
                 spr_basis(model.nodes[static_cast<size_t>(node)], patch.origin, patch.h);
             Stress value = Stress::Zero();
-            for (int k = 0; k < patch.n_terms; ++k) value += p(k) * coefficients.row(k).transpose();
+            for (int k = 0; k < n; ++k) value += p(k) * c.row(k).transpose();
             return value;
         };
-        if (!patch.boundary) {
-            own[v] = value_at(patch.vertex);
-            has_own[v] = true;
-        }
+        if (!patch.boundary) offer(v, 3, value_at(patch.vertex));
+        const unsigned char r = patch.boundary ? 1 : 2;
         for (int e : elements)
-            for (int node : nodes_of(model.elements[static_cast<size_t>(e)])) {
-                const auto nd = static_cast<size_t>(node);
-                if (!patch.boundary) {
-                    shared[nd] += value_at(node);
-                    ++n_shared[nd];
-                } else {
-                    boundary_fit[nd] += value_at(node);
-                    ++n_boundary_fit[nd];
-                }
-            }
+            for (int node : nodes_of(model.elements[static_cast<size_t>(e)]))
+                offer(static_cast<size_t>(node), r, value_at(node));
     }
 
-    // Fallback for nodes no patch reaches.
-    std::vector<Stress> out(n_nodes, Stress::Zero());
     for (size_t i = 0; i < n_nodes; ++i) {
-        if (has_own[i])
-            out[i] = own[i];
-        else if (n_shared[i] > 0)
-            out[i] = shared[i] / n_shared[i];
-        else if (n_boundary_fit[i] > 0)
-            out[i] = boundary_fit[i] / n_boundary_fit[i];
-        else {
-            // Average of the sampled values of the node's elements.
-            Stress s = Stress::Zero();
-            int count = 0;
-            for (int e : node_elements_[i])
-                for (int q = 0; q < per_element; ++q, ++count)
-                    s += samples.stress[static_cast<size_t>(e * per_element + q)];
-            out[i] = count > 0 ? Stress(s / count) : Stress::Zero();
+        if (count[i] > 0) {
+            sum[i] /= count[i];
+            continue;
         }
+        // A node no patch reaches: the mean of its elements' sampled values.
+        Stress s = Stress::Zero();
+        int n_samples = 0;
+        for (int e : elements_of(i))
+            for (int q = 0; q < per_element; ++q, ++n_samples)
+                s += samples.stress[static_cast<size_t>(e * per_element + q)];
+        sum[i] = n_samples > 0 ? Stress(s / n_samples) : Stress::Zero();
     }
-    return out;
+    return sum;
 }
 
 std::vector<Stress> recover_spr(const Model& model, const SampledStresses& samples) {

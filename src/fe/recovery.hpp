@@ -5,6 +5,7 @@
 #include "fe/model.hpp"
 #include "fe/stress.hpp"
 
+#include <span>
 #include <vector>
 
 namespace lapwing::fe {
@@ -41,18 +42,30 @@ public:
     std::vector<Stress> recover(const SampledStresses& samples) const;
 
 private:
+    // A patch keeps its normal matrix AᵀA factorized (Cholesky, lower
+    // triangle packed by rows into factors_ from `factor`: 6 numbers for a
+    // linear fit, 21 for a quadratic one) rather than the n_terms × points
+    // fit (AᵀA)⁻¹Aᵀ, which is 8× larger for a 4-node patch; each case forms
+    // Aᵀb from the sample points, as many multiply-adds as fit · b.
     struct Patch {
         int vertex = 0;
         bool boundary = false;
         int n_terms = 0;
         Vector2 origin{0, 0};
         double h = 0;
-        Eigen::MatrixXd fit; // n_terms × points: coefficients = fit · sampled values
+        size_t factor = 0;
     };
     const Model* model_;
     int per_element_ = 0;
-    std::vector<std::vector<int>> node_elements_;
+    // The elements around each node, compressed: node n's are
+    // elements_[element_start_[n] .. element_start_[n + 1]).
+    std::vector<int> element_start_, elements_;
+    std::vector<double> factors_;
     std::vector<Patch> patches_;
+    std::span<const int> elements_of(size_t node) const {
+        return {elements_.data() + element_start_[node],
+                static_cast<size_t>(element_start_[node + 1] - element_start_[node])};
+    }
 };
 
 struct ErrorEstimate {
