@@ -2,6 +2,7 @@
 #include "fe/sparse_cholesky.hpp"
 
 #include "fe/nested_dissection.hpp"
+#include "fe/openmp_scope.hpp"
 
 #include <Eigen/OrderingMethods>
 #include <Eigen/SparseCholesky>
@@ -198,6 +199,7 @@ public:
     Cholmod& operator=(const Cholmod&) = delete;
 
     void analyse(const SparsePattern& pattern) override {
+        const SerialOpenMpScope serial;
         const auto start = std::chrono::steady_clock::now();
         // The ordering needs the structure only: a pattern matrix, rather
         // than an nnz-long array of zeros allocated (and faulted in) for it.
@@ -232,6 +234,7 @@ public:
                                                  : "?";
     }
     void factorize(const SparsePattern& pattern, std::span<const double> values) override {
+        const SerialOpenMpScope serial;
         // A modified factor is simplicial LDLᵀ: start again from the kept
         // supernodal analysis of the same pattern.
         if (modified_) {
@@ -260,6 +263,7 @@ public:
         stats_.rcond = cholmod_rcond(factor_, &common_);
     }
     Eigen::MatrixXd solve(const Eigen::MatrixXd& b) const override {
+        const SerialOpenMpScope serial;
         Eigen::MatrixXd rhs = b;
         cholmod_dense B{};
         B.nrow = static_cast<size_t>(rhs.rows());
@@ -285,6 +289,7 @@ public:
     bool modify(const Eigen::SparseMatrix<double>& columns, bool add) override {
         if (!factor_ || columns.rows() != static_cast<Eigen::Index>(factor_->n)) return false;
         if (columns.nonZeros() == 0) return true;
+        const SerialOpenMpScope serial;
         const auto n = static_cast<int>(factor_->n);
         const auto* perm = static_cast<const int*>(factor_->Perm);
         std::vector<int> position(static_cast<size_t>(n));
