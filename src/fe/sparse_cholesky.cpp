@@ -157,7 +157,8 @@ UnknownGroups group_unknowns(const SparsePattern& p) {
 // ---- CHOLMOD supernodal LLᵀ ----------------------------------------------
 class Cholmod final : public SparseCholesky {
 public:
-    explicit Cholmod(Ordering ordering) : ordering_(ordering) {
+    explicit Cholmod(const SolverOptions& options)
+        : ordering_(options.ordering), poor_fill_flops_per_entry_(options.poor_fill_flops_per_entry) {
         cholmod_start(&common_);
         common_.supernodal = CHOLMOD_SUPERNODAL;
         common_.final_ll = 1;
@@ -166,6 +167,7 @@ public:
         case Ordering::automatic:
             break; // CHOLMOD's defaults
         case Ordering::amd:
+        case Ordering::adaptive:
             common_.nmethods = 1;
             common_.method[0].ordering = CHOLMOD_AMD;
             common_.postorder = 1;
@@ -213,6 +215,11 @@ public:
             node_ordering = analyse_on_nodes(A, graph, pattern);
         } else {
             factor_ = cholmod_analyze(&A, &common_);
+            if (factor_ && ordering_ == Ordering::adaptive && fill_is_poor(pattern)) {
+                NodeGraph graph(pattern);
+                node_ordering = try_node_metis(A, graph, pattern) ? "METIS on nodes (AMD's fill poor)"
+                                                                  : "AMD (METIS on nodes tried)";
+            }
         }
         if (!factor_)
             throw std::runtime_error(
@@ -414,7 +421,12 @@ private:
     }
 
     cholmod_factor* analyse_given(cholmod_sparse& A, std::vector<int>& perm) {
+        // cholmod_analyze_p uses `perm` only for a method set to GIVEN (an
+        // AMD method would order A again).
+        const int method = common_.method[0].ordering;
+        common_.method[0].ordering = CHOLMOD_GIVEN;
         cholmod_factor* f = cholmod_analyze_p(&A, perm.data(), nullptr, 0, &common_);
+        common_.method[0].ordering = method;
         if (!f)
             throw std::runtime_error(
                 fmt::format("CHOLMOD analysis failed (status {})", common_.status));
@@ -440,25 +452,36 @@ private:
         std::vector<int> perm = node_permutation(graph, p, NodeMethod::amd);
         factor_ = analyse_given(A, perm);
         if (ordering_ == Ordering::node_amd) return "AMD on nodes";
-        // node_best. CHOLMOD's default strategy keeps AMD when its
-        // factorization takes fewer than 500 flops per entry of L (or L has
-        // fewer than 5 entries per entry of A): then a nested dissection
-        // could save little against the time it takes to compute.
-        const double fl_amd = common_.fl, lnz_amd = common_.lnz;
-        if (fl_amd < poor_fill_flops_per_entry * lnz_amd ||
-            lnz_amd < poor_fill_entries_ratio * static_cast<double>(p.nnz()))
-            return "AMD on nodes";
+        // node_best.
+        if (!fill_is_poor(p)) return "AMD on nodes";
+        return try_node_metis(A, graph, p) ? "METIS on nodes (AMD's fill poor)"
+                                           : "AMD on nodes (METIS tried)";
+    }
+
+    // CHOLMOD's default strategy keeps AMD when its factorization takes
+    // fewer than 500 flops per entry of L (or L has fewer than 5 entries per
+    // entry of A): then a nested dissection could save little against the
+    // time it takes to compute. Reads the analysis just made (common_).
+    bool fill_is_poor(const SparsePattern& p) const {
+        return common_.fl >= poor_fill_flops_per_entry_ * common_.lnz &&
+               common_.lnz >= poor_fill_entries_ratio * static_cast<double>(p.nnz());
+    }
+
+    // Orders the node graph by METIS too and keeps it in factor_ if its
+    // factorization takes fewer flops than the analysis in factor_ now.
+    bool try_node_metis(cholmod_sparse& A, NodeGraph& graph, const SparsePattern& p) {
+        const double fl_first = common_.fl, lnz_first = common_.lnz;
         std::vector<int> perm_metis = node_permutation(graph, p, NodeMethod::metis);
         cholmod_factor* metis = analyse_given(A, perm_metis);
-        if (common_.fl < fl_amd) {
+        if (common_.fl < fl_first) {
             cholmod_free_factor(&factor_, &common_);
             factor_ = metis;
-            return "METIS on nodes (AMD's fill poor)";
+            return true;
         }
         cholmod_free_factor(&metis, &common_);
-        common_.fl = fl_amd;
-        common_.lnz = lnz_amd;
-        return "AMD on nodes (METIS tried)";
+        common_.fl = fl_first;
+        common_.lnz = lnz_first;
+        return false;
     }
 
     static cholmod_sparse view(const SparsePattern& p, std::span<const double> values) {
@@ -482,10 +505,11 @@ private:
     static constexpr int dissection_leaf = 128;
     // CHOLMOD's defaults for trying another ordering after AMD (the
     // cholmod_common fields method[0].fl_ratio... are documented in the
-    // CHOLMOD user guide, "Common->nmethods = 0").
-    static constexpr double poor_fill_flops_per_entry = 500;
+    // CHOLMOD user guide, "Common->nmethods = 0"); the flops threshold comes
+    // from SolverOptions.
     static constexpr double poor_fill_entries_ratio = 5;
     Ordering ordering_;
+    double poor_fill_flops_per_entry_;
     mutable cholmod_common common_{};
     cholmod_factor* factor_ = nullptr;
     cholmod_factor* symbolic_ = nullptr; // copy of the analysis, for after modify()
@@ -500,7 +524,7 @@ std::unique_ptr<SparseCholesky>
 make_sparse_cholesky([[maybe_unused]] const SolverOptions& options) {
 #ifdef LAPWING_HAVE_CHOLMOD
     if (options.backend == SolverBackend::cholmod)
-        return std::make_unique<Cholmod>(options.ordering);
+        return std::make_unique<Cholmod>(options);
 #endif
     return std::make_unique<EigenLdlt>();
 }

@@ -26,7 +26,10 @@ enum class SolverBackend { cholmod, eigen_ldlt };
 // METIS's multilevel nested dissection (Karypis & Kumar 1998, SIAM J. Sci.
 // Comput. 20:359–392) of the node graph. node_best: AMD on the nodes, and
 // where that fill is poor (CHOLMOD's own test: flops ≥ 500 nnz(L)) METIS on
-// the nodes as well, keeping the one with fewer flops.
+// the nodes as well, keeping the one with fewer flops. adaptive: the same
+// rule with AMD on the unknowns as the first ordering, so that wherever its
+// fill is not poor (every gusset-sized model) it is exactly `amd`; at
+// 2·10⁶ dofs it switches to METIS on the nodes (docs/benchmarks.md).
 enum class Ordering {
     automatic,
     amd,
@@ -35,7 +38,8 @@ enum class Ordering {
     node_amd,
     nested_dissection,
     node_metis,
-    node_best
+    node_best,
+    adaptive
 };
 
 struct SolverOptions {
@@ -44,8 +48,14 @@ struct SolverOptions {
 #else
     SolverBackend backend = SolverBackend::eigen_ldlt;
 #endif
-    // automatic: CHOLMOD's own choice (AMD, then METIS when AMD's fill is poor).
-    Ordering ordering = Ordering::amd;
+    // automatic: CHOLMOD's own choice (AMD, then METIS on the unknowns when
+    // AMD's fill is poor); adaptive does the same with METIS on the nodes.
+    Ordering ordering = Ordering::adaptive;
+    // node_best and adaptive try METIS where the first ordering's
+    // factorization takes at least this many flops per entry of L (and L
+    // has at least 5 entries per entry of A). 500 is CHOLMOD's own threshold
+    // (cholmod_analyze, Common->method[0].fl_ratio... in its user guide).
+    double poor_fill_flops_per_entry = 500;
 };
 
 struct FactorStats {

@@ -227,3 +227,38 @@ TEST_CASE("METIS on the node graph: the same solution as AMD, fill under George'
     CHECK(pb.stats().factor.ordering == "AMD on nodes");
     CHECK(pb.stats().factor.nnz_L == pna.stats().factor.nnz_L);
 }
+
+TEST_CASE("adaptive ordering: exactly AMD where AMD's fill is not poor; where the threshold "
+          "says it is, the ordering with fewer flops of AMD and METIS on the nodes") {
+    // The 120 × 120 patch test of the cases above: flops / nnz(L) is a few
+    // tens, under CHOLMOD's 500 (cholmod_analyze's default strategy).
+    const int k = 120;
+    const PatchTest t = tension_patch_test(k, 50.0);
+    SolverOptions amd, adaptive, eager, metis;
+    amd.ordering = Ordering::amd;
+    adaptive.ordering = Ordering::adaptive;
+    CHECK(SolverOptions{}.ordering == Ordering::adaptive); // lapwing's default
+    metis.ordering = Ordering::node_metis;
+    eager.ordering = Ordering::adaptive;
+    eager.poor_fill_flops_per_entry = 1; // every fill counts as poor: METIS is tried
+    const LinearStaticProblem pa(t.model, t.constraints, amd), pd(t.model, t.constraints, adaptive),
+        pe(t.model, t.constraints, eager), pm(t.model, t.constraints, metis);
+    const FactorStats& fa = pa.stats().factor;
+    const FactorStats& fd = pd.stats().factor;
+    CHECK(fd.ordering == "AMD");
+    CHECK(fd.nnz_L == fa.nnz_L);
+    CHECK(fd.flops == fa.flops);
+    const Solution sa = pa.solve(t.loads), sd = pd.solve(t.loads);
+    CHECK(sd.u == sa.u); // the same ordering: the same arithmetic, bit for bit
+
+    const FactorStats& fe_ = pe.stats().factor;
+    const FactorStats& fm = pm.stats().factor;
+    const bool metis_fewer = fm.flops < fa.flops;
+    CHECK(fe_.ordering ==
+          (metis_fewer ? "METIS on nodes (AMD's fill poor)" : "AMD (METIS on nodes tried)"));
+    CHECK(fe_.flops == std::min(fa.flops, fm.flops));
+    CHECK(fe_.nnz_L == (metis_fewer ? fm.nnz_L : fa.nnz_L));
+    const Solution se = pe.solve(t.loads);
+    CHECK((se.u - sa.u).norm() <= 1e-10 * sa.u.norm());
+    check_exact_tension(t, se.u);
+}

@@ -30,7 +30,7 @@ struct Options {
     long target_dofs = 10000;
     int repeats = 3;
     long eigen_max_dofs = 400000;              // above this Eigen's LDLᵀ exceeds ~2 min here
-    fe::Ordering ordering = fe::Ordering::amd; // lapwing's default (SolverOptions)
+    fe::Ordering ordering = fe::SolverOptions{}.ordering; // lapwing's default
     bool problem_path = true;                  // also time LinearStaticProblem end to end
 };
 
@@ -72,9 +72,10 @@ fe::Ordering parse_ordering(const std::string& s) {
     if (s == "nd") return fe::Ordering::nested_dissection;
     if (s == "node-metis") return fe::Ordering::node_metis;
     if (s == "node-best") return fe::Ordering::node_best;
+    if (s == "adaptive") return fe::Ordering::adaptive;
     throw std::invalid_argument(
         "--ordering " + s +
-        ": expected amd, node-amd, node-metis, node-best, nd, metis or automatic");
+        ": expected adaptive, amd, node-amd, node-metis, node-best, nd, metis or automatic");
 }
 
 long parse_count(const std::string& flag, const std::string& s) {
@@ -118,7 +119,7 @@ Options parse(int argc, char** argv) {
             throw std::invalid_argument(
                 "unknown argument " + arg +
                 " (use --smoke | --kind K --dofs N [--repeats N] "
-                "[--ordering amd|node-amd|node-metis|node-best|nd|metis|automatic]"
+                "[--ordering adaptive|amd|node-amd|node-metis|node-best|nd|metis|automatic]"
                 " [--eigen-max-dofs N | --no-eigen] [--no-problem-path])");
     }
     return o;
