@@ -133,6 +133,7 @@ std::string read_text(const fs::path& p) {
 struct LapwingResult {
     Eigen::VectorXd u;
     std::vector<fe::Stress> spr, averaged;
+    fe::FactorStats factor;
 };
 
 // What the timed child does: mesh, assemble, factorize, solve, recover.
@@ -142,6 +143,7 @@ LapwingResult solve_with_lapwing(fe::ElementKind kind, long dofs) {
     LapwingResult r;
     r.u = problem.solve(p.loads).u;
     r.spr = fe::recover_spr(p.model, fe::spr_samples(p.model, r.u));
+    r.factor = problem.stats().factor;
     return r;
 }
 
@@ -244,7 +246,9 @@ int main(int argc, char** argv) {
     try {
         if (o.child) {
             const LapwingResult r = solve_with_lapwing(o.kind, o.target_dofs);
-            std::printf("max |u| %.6g\n", r.u.cwiseAbs().maxCoeff());
+            std::printf("max |u| %.6g; ordering %s, nnz(L) %.4g, flops %.4g\n",
+                        r.u.cwiseAbs().maxCoeff(), r.factor.ordering.c_str(), r.factor.nnz_L,
+                        r.factor.flops);
             return 0;
         }
         if (!on_path("ccx")) {
