@@ -55,7 +55,9 @@ const Runtime& runtime() {
 
 } // namespace
 
-bool SerialOpenMpScope::active() { return runtime().set != nullptr; }
+bool SerialOpenMpScope::active() {
+    return runtime().set != nullptr;
+}
 
 SerialOpenMpScope::SerialOpenMpScope() {
     const Runtime& r = runtime();

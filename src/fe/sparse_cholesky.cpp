@@ -158,7 +158,8 @@ UnknownGroups group_unknowns(const SparsePattern& p) {
 class Cholmod final : public SparseCholesky {
 public:
     explicit Cholmod(const SolverOptions& options)
-        : ordering_(options.ordering), poor_fill_flops_per_entry_(options.poor_fill_flops_per_entry) {
+        : ordering_(options.ordering),
+          poor_fill_flops_per_entry_(options.poor_fill_flops_per_entry) {
         cholmod_start(&common_);
         common_.supernodal = CHOLMOD_SUPERNODAL;
         common_.final_ll = 1;
@@ -217,8 +218,9 @@ public:
             factor_ = cholmod_analyze(&A, &common_);
             if (factor_ && ordering_ == Ordering::adaptive && fill_is_poor(pattern)) {
                 NodeGraph graph(pattern);
-                node_ordering = try_node_metis(A, graph, pattern) ? "METIS on nodes (AMD's fill poor)"
-                                                                  : "AMD (METIS on nodes tried)";
+                node_ordering = try_node_metis(A, graph, pattern)
+                                    ? "METIS on nodes (AMD's fill poor)"
+                                    : "AMD (METIS on nodes tried)";
             }
         }
         if (!factor_)
@@ -523,8 +525,7 @@ private:
 std::unique_ptr<SparseCholesky>
 make_sparse_cholesky([[maybe_unused]] const SolverOptions& options) {
 #ifdef LAPWING_HAVE_CHOLMOD
-    if (options.backend == SolverBackend::cholmod)
-        return std::make_unique<Cholmod>(options);
+    if (options.backend == SolverBackend::cholmod) return std::make_unique<Cholmod>(options);
 #endif
     return std::make_unique<EigenLdlt>();
 }

@@ -8,24 +8,16 @@
 // residual of each case is held at 1e-10 by analyse()).
 #include "analysis/analyse.hpp"
 #include "analysis/contact_seed.hpp"
-#include "input/load_connection.hpp"
 #include "mesh/mesh.hpp"
+#include "support/templates.hpp"
 
 #include <doctest/doctest.h>
-#include <fstream>
-#include <sstream>
 
 using namespace lapwing;
 
 namespace {
 
-model::Connection load_template(const std::string& name, const std::vector<std::string>& sets) {
-    const std::string path = std::string(LAPWING_SOURCE_DIR) + "/templates/" + name;
-    std::ifstream in(path);
-    std::stringstream text;
-    text << in.rdbuf();
-    return input::load_connection(text.str(), path, sets);
-}
+using test::load_template;
 
 // The model's mesh and one with half the element size and twice the
 // elements round each hole, as the check's convergence mesh.

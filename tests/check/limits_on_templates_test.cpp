@@ -7,15 +7,13 @@
 #include "check/block_shear_paths.hpp"
 #include "check/bolt_clearances.hpp"
 #include "geometry/region_boundary.hpp"
-#include "input/load_connection.hpp"
 #include "model/bolts.hpp"
+#include "support/templates.hpp"
 
 #include <algorithm>
 #include <cmath>
 #include <doctest/doctest.h>
-#include <fstream>
 #include <numbers>
-#include <sstream>
 
 using namespace lapwing;
 using check::BlockShearPaths;
@@ -24,11 +22,7 @@ TEST_CASE("plate-check geometry on every template: paths and clearances") {
     for (const char* name :
          {"corner-gusset", "truss-gusset", "lap-splice", "flange-splice", "web-splice"}) {
         CAPTURE(name);
-        std::ifstream file(std::string(LAPWING_SOURCE_DIR) + "/templates/" + name + ".toml");
-        REQUIRE(file);
-        std::stringstream text;
-        text << file.rdbuf();
-        const model::Connection c = input::load_connection(text.str(), name);
+        const model::Connection c = test::load_template(std::string(name) + ".toml");
         const analysis::PlateLayout layout = analysis::plate_layout(c);
         const auto boundary = geometry::build_region_boundary(layout.region);
         for (const model::Member& m : c.members) {

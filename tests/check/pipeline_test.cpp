@@ -3,25 +3,17 @@
 // little when the element size is halved; local peaks may move more and are
 // reported, not held.
 #include "check/pipeline.hpp"
-#include "input/load_connection.hpp"
+#include "support/templates.hpp"
 
 #include <algorithm>
 #include <doctest/doctest.h>
-#include <fstream>
-#include <sstream>
 #include <thread>
 
 using namespace lapwing;
 
 namespace {
 
-model::Connection load_template(const std::string& name, const std::vector<std::string>& sets) {
-    const std::string path = std::string(LAPWING_SOURCE_DIR) + "/templates/" + name;
-    std::ifstream in(path);
-    std::stringstream text;
-    text << in.rdbuf();
-    return input::load_connection(text.str(), path, sets);
-}
+using test::load_template;
 
 } // namespace
 

@@ -4,8 +4,8 @@
 // here the thread's implicit task).
 #include "fe/openmp_scope.hpp"
 
-#include <doctest/doctest.h>
 #include <dlfcn.h>
+#include <doctest/doctest.h>
 #include <thread>
 
 using lapwing::fe::SerialOpenMpScope;

@@ -2,26 +2,21 @@
 // template reads inches and ksi, never a silent mix with millimetres), and
 // the figures of every load case with distinct, space-free file names.
 #include "check/pipeline.hpp"
-#include "input/load_connection.hpp"
 #include "report/figures.hpp"
 #include "report/outputs.hpp"
+#include "support/templates.hpp"
 
 #include <doctest/doctest.h>
 #include <fmt/format.h>
-#include <fstream>
 #include <regex>
 #include <set>
-#include <sstream>
 
 using namespace lapwing;
 
 namespace {
 
 check::CheckOutcome run(const std::string& name, const std::vector<std::string>& sets) {
-    std::ifstream in(std::string(LAPWING_SOURCE_DIR) + "/templates/" + name);
-    std::stringstream text;
-    text << in.rdbuf();
-    const auto c = input::load_connection(text.str(), name, sets);
+    const auto c = test::load_template(name, sets);
     check::CheckOptions options;
     options.two_mesh = false;
     return check::check_connection(c, options);

@@ -2,19 +2,12 @@
 // convergence mesh, so each pipeline run takes a fraction of a second.
 #pragma once
 
-#include <fstream>
-#include <sstream>
+#include "support/templates.hpp"
+
 #include <string>
 #include <vector>
 
 namespace lapwing::test {
-
-inline std::string read_template(const std::string& name) {
-    std::ifstream in(std::string(LAPWING_SOURCE_DIR) + "/templates/" + name);
-    std::stringstream s;
-    s << in.rdbuf();
-    return s.str();
-}
 
 // Coarse settings for the lap splice: spread ties (a linear model), large
 // elements; the sweep must match single runs at any settings, so coarse

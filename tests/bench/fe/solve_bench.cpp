@@ -29,9 +29,9 @@ struct Options {
     fe::ElementKind kind = fe::ElementKind::Q4;
     long target_dofs = 10000;
     int repeats = 3;
-    long eigen_max_dofs = 400000;              // above this Eigen's LDLᵀ exceeds ~2 min here
+    long eigen_max_dofs = 400000; // above this Eigen's LDLᵀ exceeds ~2 min here
     fe::Ordering ordering = fe::SolverOptions{}.ordering; // lapwing's default
-    bool problem_path = true;                  // also time LinearStaticProblem end to end
+    bool problem_path = true; // also time LinearStaticProblem end to end
 };
 
 // Named figures of one repeat, in the order they were recorded.
