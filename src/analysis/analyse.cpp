@@ -158,18 +158,23 @@ void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& 
 
 // The FE core's solve, with the load cases named when it fails (a solution
 // that is not finite).
-std::vector<fe::Solution> solve_named(const fe::LinearStaticProblem& solver,
-                                      std::span<const fe::Loads> loads,
-                                      const std::vector<CaseSpec>& specs,
-                                      const std::vector<size_t>& case_of) {
+template <class Solve>
+auto named(const std::vector<CaseSpec>& specs, const std::vector<size_t>& case_of, Solve solve) {
     try {
-        return solver.solve(loads);
+        return solve();
     } catch (const AnalysisError& e) {
         std::string names;
         for (size_t i : case_of) names += (names.empty() ? "\"" : ", \"") + specs[i].name + "\"";
         throw AnalysisError(fmt::format(
             "{} {}: {}", case_of.size() == 1 ? "load case" : "load cases", names, e.what()));
     }
+}
+
+std::vector<fe::Solution> solve_named(const fe::LinearStaticProblem& solver,
+                                      std::span<const fe::Loads> loads,
+                                      const std::vector<CaseSpec>& specs,
+                                      const std::vector<size_t>& case_of) {
+    return named(specs, case_of, [&] { return solver.solve(loads); });
 }
 
 // The order to solve contact cases in: each next the remaining case whose
@@ -338,6 +343,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
             previous = i;
             std::set<std::vector<bool>> seen;
             bool settled = false;
+            Eigen::VectorXd unknowns; // of the last pass, on the current factor
             for (int iteration = 1; iteration <= max_contact_iterations; ++iteration) {
                 for (size_t j = 0; j < k0.size(); ++j)
                     working.link_springs[j].k = active[j] ? k0[j] : 0.0;
@@ -346,7 +352,8 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 } catch (const AnalysisError& e) {
                     rethrow_in_connection_terms(c, p, e);
                 }
-                const Eigen::VectorXd u = solver->displacements(loads);
+                unknowns = solver->unknowns(loads);
+                const Eigen::VectorXd u = solver->dof_map().expand(unknowns);
                 seen.insert(active);
                 const double tol = 1e-9 * std::max(1e-30, u.cwiseAbs().maxCoeff());
                 std::vector<bool> next = active;
@@ -372,7 +379,10 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 throw AnalysisError(
                     fmt::format("bearing contact in load case \"{}\" did not settle in {} passes",
                                 out.name, max_contact_iterations));
-            fe::Solution s = solve_named(*solver, std::span(&loads, 1), specs, {i}).front();
+            // The settled pass solved on the factor of the settled set: its
+            // unknowns are the solution, checked by their residual.
+            fe::Solution s =
+                named(specs, {i}, [&] { return solver->solution_of(loads, unknowns); });
             if (!(s.relative_residual <= 1e-10)) {
                 try {
                     solver->refactorize(working);

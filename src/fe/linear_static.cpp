@@ -131,10 +131,13 @@ bool LinearStaticProblem::update_link_springs(const Model& model, int max_rank) 
     return true;
 }
 
+Eigen::VectorXd LinearStaticProblem::unknowns(const Loads& loads) const {
+    return cholesky_->solve(map_.restrict_to_unknowns(applied_forces(*model_, loads)) +
+                            prescribed_load_);
+}
+
 Eigen::VectorXd LinearStaticProblem::displacements(const Loads& loads) const {
-    const Eigen::VectorXd f =
-        map_.restrict_to_unknowns(applied_forces(*model_, loads)) + prescribed_load_;
-    return map_.expand(cholesky_->solve(f));
+    return map_.expand(unknowns(loads));
 }
 
 Solution LinearStaticProblem::solve(const Loads& loads) const {
@@ -149,7 +152,20 @@ std::vector<Solution> LinearStaticProblem::solve(std::span<const Loads> load_cas
         f_full.col(c) = applied_forces(*model_, load_cases[static_cast<size_t>(c)]);
         f_reduced.col(c) = map_.restrict_to_unknowns(f_full.col(c)) + prescribed_load_;
     }
-    const Eigen::MatrixXd u_reduced = cholesky_->solve(f_reduced);
+    return solutions(f_full, f_reduced, cholesky_->solve(f_reduced));
+}
+
+Solution LinearStaticProblem::solution_of(const Loads& loads,
+                                          const Eigen::VectorXd& unknowns) const {
+    const Eigen::VectorXd f_full = applied_forces(*model_, loads);
+    const Eigen::VectorXd f_reduced = map_.restrict_to_unknowns(f_full) + prescribed_load_;
+    return solutions(f_full, f_reduced, unknowns).front();
+}
+
+std::vector<Solution> LinearStaticProblem::solutions(const Eigen::MatrixXd& f_full,
+                                                     const Eigen::MatrixXd& f_reduced,
+                                                     const Eigen::MatrixXd& u_reduced) const {
+    const auto n_cases = static_cast<int>(f_full.cols());
     const Eigen::MatrixXd residual =
         symmetric_multiply(assembler_->pattern(), values_, u_reduced) - f_reduced;
 

@@ -69,6 +69,12 @@ public:
     std::vector<Solution> solve(std::span<const Loads> load_cases) const;
     // The displacements of every dof alone, without reactions and residual.
     Eigen::VectorXd displacements(const Loads& loads) const;
+    // The unknowns ũ of the reduced system alone (u = dof_map().expand(ũ)).
+    Eigen::VectorXd unknowns(const Loads& loads) const;
+    // What solve(loads) returns, from the unknowns that unknowns(loads) has
+    // just returned on the current factor: the reactions and the residual
+    // without solving again (a contact iteration's settled pass).
+    Solution solution_of(const Loads& loads, const Eigen::VectorXd& unknowns) const;
 
     const Model& model() const { return *model_; }
     const DofMap& dof_map() const { return map_; }
@@ -77,6 +83,8 @@ public:
 
 private:
     void assemble_and_factorize();
+    std::vector<Solution> solutions(const Eigen::MatrixXd& f_full, const Eigen::MatrixXd& f_reduced,
+                                    const Eigen::MatrixXd& u_reduced) const;
 
     const Model* model_;
     Constraints constraints_;

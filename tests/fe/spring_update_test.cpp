@@ -117,6 +117,14 @@ TEST_CASE("a modified factor of a plate with contact springs agrees with a fresh
         (d.dof % 2 == 0 ? rx : ry) += updated.reactions(d.dof);
     CHECK(rx == lapwing::test::approx(-1000.0, 1e-9));
     CHECK(ry == lapwing::test::approx(400.0, 1e-9));
+
+    // A contact pass's own unknowns make the same solution without solving
+    // again (solution_of): the same numbers, since it is the same solve.
+    const Solution from_pass = problem.solution_of(p.load(), problem.unknowns(p.load()));
+    CHECK((from_pass.u - updated.u).cwiseAbs().maxCoeff() == 0.0);
+    CHECK((from_pass.reactions - updated.reactions).cwiseAbs().maxCoeff() == 0.0);
+    CHECK(from_pass.relative_residual == updated.relative_residual);
+    CHECK(problem.dof_map().expand(problem.unknowns(p.load())) == problem.displacements(p.load()));
 }
 
 TEST_CASE("a rank above the limit refactorizes instead, with the same answer") {
