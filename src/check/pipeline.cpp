@@ -44,7 +44,7 @@ namespace {
 
 // The values compared between the two meshes: every peak, weld and section
 // figure that a check row uses.
-void compare(const Evaluation& coarse, const Evaluation& fine, Convergence& out) {
+void compare(const CheckOutcome& coarse, const Evaluation& fine, Convergence& out) {
     for (size_t k = 0; k < coarse.results.cases.size(); ++k) {
         const std::string& lc = coarse.results.cases[k].name;
         out.rows.push_back({"peak von Mises away from bolt holes", lc, Quantity::stress,
@@ -165,6 +165,24 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     out.seconds.mesh = e.seconds_mesh;
     out.seconds.analysis = e.seconds_analysis;
     out.seconds.checks = e.seconds_measure + seconds_since(start);
+    out.layout = std::move(e.layout);
+    out.mesh = std::move(e.mesh);
+    out.results = std::move(e.results);
+    out.sections = std::move(e.sections);
+    out.section_stress = std::move(e.section_stress);
+    out.peaks = std::move(e.peaks);
+    out.welds = std::move(e.welds);
+    out.weld_forces = std::move(e.weld_forces);
+    out.element_size = e.element_size;
+    // Declared after `out`, which it may read: waited for first, also when
+    // the convergence mesh throws.
+    struct WaitOnExit {
+        std::future<void> work;
+        ~WaitOnExit() {
+            if (work.valid()) work.wait();
+        }
+    } model_outcome;
+    if (options.on_model_outcome) model_outcome.work = options.on_model_outcome(out);
 
     if (options.two_mesh) {
         // Globally refined rather than only near the governing regions: simpler
@@ -177,13 +195,13 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
         start = std::chrono::steady_clock::now();
         Convergence& cv = out.convergence;
         cv.done = true;
-        cv.coarse_size = e.element_size;
+        cv.coarse_size = out.element_size;
         cv.fine_size = f.element_size;
-        cv.coarse_elements = e.mesh.n_elements();
+        cv.coarse_elements = out.mesh.n_elements();
         cv.fine_elements = f.mesh.n_elements();
-        cv.coarse_dofs = e.results.problem.model.n_dofs();
+        cv.coarse_dofs = out.results.problem.model.n_dofs();
         cv.fine_dofs = f.results.problem.model.n_dofs();
-        compare(e, f, cv);
+        compare(out, f, cv);
         for (ConvergenceRow& r : cv.rows) {
             double largest = 0;
             for (const ConvergenceRow& o : cv.rows)
@@ -195,15 +213,7 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
         // The finer mesh's own time, whether or not it overlapped the above.
         out.seconds.fine_mesh = f.seconds_mesh + f.seconds_analysis + f.seconds_measure;
     }
-    out.layout = std::move(e.layout);
-    out.mesh = std::move(e.mesh);
-    out.results = std::move(e.results);
-    out.sections = std::move(e.sections);
-    out.section_stress = std::move(e.section_stress);
-    out.peaks = std::move(e.peaks);
-    out.welds = std::move(e.welds);
-    out.weld_forces = std::move(e.weld_forces);
-    out.element_size = e.element_size;
+    if (model_outcome.work.valid()) model_outcome.work.get(); // its exceptions are ours
     return out;
 }
 

@@ -14,12 +14,14 @@
 #include "model/connection.hpp"
 
 #include <functional>
+#include <future>
 #include <string>
 #include <vector>
 
 namespace lapwing::check {
 
 struct ReuseCache; // src/check/reuse_cache.hpp (sweeps)
+struct CheckOutcome;
 
 // The steps of check_connection in the order they run, for a progress
 // display. Meshing and solving share a step because both happen inside one
@@ -56,6 +58,13 @@ struct CheckOptions {
     // Refuse, before meshing, a model whose mesh (or, with two_mesh, whose
     // finer convergence mesh) is estimated above this many dofs.
     long max_dofs = analysis::default_max_dofs;
+    // Called once the model's mesh is solved and checked, before the
+    // convergence mesh is awaited, with the outcome complete but for
+    // `convergence` and `seconds`: for work that can overlap the convergence
+    // mesh, such as rendering the figures (cli/check_command.cpp). The
+    // future it returns is waited for before check_connection returns or
+    // throws, so the outcome is not moved or destroyed while still read.
+    std::function<std::future<void>(const CheckOutcome&)> on_model_outcome;
 };
 
 // The highest local stresses of one load case, from the recovered nodal and

@@ -14,6 +14,7 @@
 #include <condition_variable>
 #include <filesystem>
 #include <fmt/format.h>
+#include <future>
 #include <iostream>
 #include <mutex>
 #include <ostream>
@@ -100,6 +101,14 @@ int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err) {
         const bool show_progress = !args.quiet && !args.json && is_terminal(out);
         Progress progress(show_progress);
         options.on_stage = [&](check::Stage s) { progress.stage(check::words(s)); };
+        // The figures and model.vtu need only the model's mesh: rendered while
+        // the convergence mesh is solved.
+        ModelParts parts;
+        if (writing)
+            options.on_model_outcome = [&](const check::CheckOutcome& model_only) {
+                return std::async(std::launch::async,
+                                  [&] { parts = render_model_parts(c, model_only); });
+            };
         const check::CheckOutcome o = check::check_connection(c, options);
 
         report::SummaryOptions summary;
@@ -109,7 +118,7 @@ int run_check(const CheckArgs& args, std::ostream& out, std::ostream& err) {
             progress.stage("writing the calc sheet and data files");
             const report::RunInfo run = make_run_info(args.file, text, c, args.command_line,
                                                       args.reproducible, options.two_mesh);
-            summary.files = write_check_outputs(folder, c, o, run);
+            summary.files = write_check_outputs(folder, c, o, run, parts);
             summary.folder = folder.string();
         }
         progress.done();

@@ -13,6 +13,7 @@
 
 #include <algorithm>
 #include <ctime>
+#include <future>
 #include <stdexcept>
 
 namespace lapwing::cli {
@@ -45,12 +46,11 @@ void prepare_folder(const fs::path& folder, bool force) {
         fs::create_directories(folder, ec);
         if (ec)
             throw OutputError("cannot create output folder " + folder.string() + ": " +
-                                     ec.message());
+                              ec.message());
         return;
     }
     if (!fs::is_directory(folder, ec))
-        throw OutputError("output folder " + folder.string() +
-                                 " exists and is not a folder");
+        throw OutputError("output folder " + folder.string() + " exists and is not a folder");
     std::vector<std::string> entries;
     for (const auto& entry : fs::directory_iterator(folder, ec))
         entries.push_back(entry.path().filename().string());
@@ -76,20 +76,34 @@ report::RunInfo make_run_info(const std::string& input_file, const std::string& 
     return run;
 }
 
+ModelParts render_model_parts(const model::Connection& c, const check::CheckOutcome& o) {
+    ModelParts parts;
+    std::future<std::string> vtu;
+    if (wants(c, "vtu")) vtu = std::async(std::launch::async, [&] { return report::model_vtu(o); });
+    parts.figures = report::all_figures(o);
+    if (vtu.valid()) parts.vtu = vtu.get();
+    return parts;
+}
+
 std::vector<std::string> write_check_outputs(const fs::path& folder, const model::Connection& c,
                                              const check::CheckOutcome& o,
                                              const report::RunInfo& run) {
+    return write_check_outputs(folder, c, o, run, render_model_parts(c, o));
+}
+
+std::vector<std::string> write_check_outputs(const fs::path& folder, const model::Connection& c,
+                                             const check::CheckOutcome& o,
+                                             const report::RunInfo& run, const ModelParts& parts) {
     std::vector<std::string> written;
-    const std::vector<report::Figure> figures = report::all_figures(o);
     const auto put = [&](const std::string& name, const std::string& content) {
         write_atomically(folder / name, content);
         written.push_back(name);
     };
-    if (wants(c, "html")) put("report.html", report::calc_sheet_html(o, run, figures));
-    if (wants(c, "json")) put("results.json", report::results_json(o, run, figures));
-    if (wants(c, "vtu")) put("model.vtu", report::model_vtu(o));
+    if (wants(c, "html")) put("report.html", report::calc_sheet_html(o, run, parts.figures));
+    if (wants(c, "json")) put("results.json", report::results_json(o, run, parts.figures));
+    if (wants(c, "vtu")) put("model.vtu", parts.vtu);
     if (c.report.figures)
-        for (const report::Figure& f : figures) put(f.file, f.svg);
+        for (const report::Figure& f : parts.figures) put(f.file, f.svg);
     return written;
 }
 

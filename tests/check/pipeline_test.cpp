@@ -6,7 +6,11 @@
 #include "support/templates.hpp"
 
 #include <algorithm>
+#include <atomic>
+#include <chrono>
 #include <doctest/doctest.h>
+#include <future>
+#include <memory>
 #include <thread>
 
 using namespace lapwing;
@@ -70,6 +74,46 @@ TEST_CASE("check pipeline: the stage callback sees every stage once, in the orde
     options.two_mesh = false;
     check::check_connection(c, options);
     CHECK(seen == std::vector<check::Stage>{check::Stage::model, check::Stage::checks});
+}
+
+TEST_CASE("check pipeline: the model-mesh callback sees the final outcome but for the "
+          "convergence, and its work is awaited before the pipeline returns") {
+    const model::Connection c =
+        load_template("web-splice.toml", {"mesh.size=30", "mesh.near_hole_size=10"});
+    check::CheckOptions options;
+    auto finished = std::make_shared<std::atomic<bool>>(false);
+    std::vector<double> ratios;
+    int calls = 0;
+    bool convergence_seen = true;
+    options.on_model_outcome = [&, finished](const check::CheckOutcome& partial) {
+        ++calls;
+        convergence_seen = partial.convergence.done;
+        for (const check::CheckRow& r : partial.table.rows) ratios.push_back(r.ratio);
+        // Work that ends well after the rest of the pipeline would, on a
+        // thread of its own: a future that does not wait when destroyed, so
+        // only the pipeline's own wait can make it finish first.
+        std::promise<void> done;
+        std::future<void> future = done.get_future();
+        std::thread([finished, done = std::move(done)]() mutable {
+            std::this_thread::sleep_for(std::chrono::milliseconds(300));
+            *finished = true;
+            done.set_value();
+        }).detach();
+        return future;
+    };
+    const check::CheckOutcome o = check::check_connection(c, options);
+    CHECK(calls == 1);
+    CHECK_FALSE(convergence_seen); // called before the convergence mesh is compared
+    REQUIRE(o.convergence.done);
+    REQUIRE(ratios.size() == o.table.rows.size());
+    for (size_t i = 0; i < ratios.size(); ++i) CHECK(ratios[i] == o.table.rows[i].ratio);
+    CHECK(*finished);
+
+    // Without the convergence mesh little is left after the callback.
+    *finished = false;
+    options.two_mesh = false;
+    check::check_connection(c, options);
+    CHECK(*finished);
 }
 
 TEST_CASE("check pipeline: the concurrent convergence mesh gives the sequential results bit for "
