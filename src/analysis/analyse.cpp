@@ -39,19 +39,14 @@ double gap(const fe::LinkSpring& s, const Eigen::VectorXd& u) {
     return (node_u(u, s.node_b) - node_u(u, s.node_a)).dot(s.direction);
 }
 
-// `spr` holds the patch fits of the mesh, built by the first case and
-// applied to every later one.
+// Everything of a case but its stresses (recover_stresses, once every case
+// is solved).
 void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& model,
                const fe::Solution& s, const std::map<std::string, double>& factors,
-               std::optional<fe::SprRecovery>& spr, CaseResult& out) {
+               CaseResult& out) {
     out.u = s.u;
     out.dof_reactions = s.reactions;
     out.solver_residual = s.relative_residual;
-    const fe::SampledStresses samples = fe::spr_samples(model, s.u);
-    if (!spr) spr.emplace(model, samples);
-    auto nodal = spr->recover(samples);
-    nodal.resize(static_cast<size_t>(p.n_plate_nodes));
-    out.nodal_stress = std::move(nodal);
 
     // Applied loads: forces at nodes and moments on rotation dofs.
     out.applied_force.setZero();
@@ -115,6 +110,24 @@ void fill_case(const model::Connection& c, const FeProblem& p, const fe::Model& 
     const double scale = std::hypot(out.applied_force.norm(), out.applied_moment / p.size);
     const double imbalance = std::hypot(total_force.norm(), total_moment / p.size);
     out.equilibrium_residual = scale > 0 ? imbalance / scale : imbalance;
+}
+
+// The recovered nodal stresses of every case, then the check that each
+// case's numbers are finite: the sampled stresses of all cases in one pass
+// over the elements (their strain operators once), and the SPR patch fits,
+// which depend on the mesh only, built once.
+void recover_stresses(const FeProblem& p, const fe::Model& model, std::vector<CaseResult>& cases) {
+    std::vector<const Eigen::VectorXd*> fields;
+    for (const CaseResult& r : cases) fields.push_back(&r.u);
+    const std::vector<fe::SampledStresses> samples = fe::spr_samples(model, fields);
+    std::optional<fe::SprRecovery> spr;
+    for (size_t k = 0; k < cases.size(); ++k) {
+        if (!spr) spr.emplace(model, samples[k]);
+        std::vector<fe::Stress> nodal = spr->recover(samples[k]);
+        nodal.resize(static_cast<size_t>(p.n_plate_nodes));
+        cases[k].nodal_stress = std::move(nodal);
+    }
+    for (const CaseResult& r : cases) check_finite(r);
 }
 
 // Rewords the FE core's restraint messages for a connection.
@@ -276,7 +289,6 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         rethrow_in_connection_terms(c, p, e);
     }
     results.cases.resize(specs.size());
-    std::optional<fe::SprRecovery> spr;
     double rcond = solver->stats().factor.rcond;
     if (!p.has_contact) {
         // Linear: one factorization; combinations are factored sums.
@@ -306,8 +318,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 s.applied += factor * it->second->applied;
                 s.relative_residual = std::max(s.relative_residual, it->second->relative_residual);
             }
-            fill_case(c, p, working, s, specs[i].factors, spr, out);
-            check_finite(out);
+            fill_case(c, p, working, s, specs[i].factors, out);
         }
     } else {
         // Bearing-only contact: each case and combination by its own active
@@ -395,10 +406,10 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
             start_set = active;
             out.contact_closed.assign(active.begin(), active.end());
             if (hooks && hooks->settled) hooks->settled(i, contact_seed(p, active, s.u));
-            fill_case(c, p, working, s, specs[i].factors, spr, out);
-            check_finite(out);
+            fill_case(c, p, working, s, specs[i].factors, out);
         }
     }
+    recover_stresses(p, working, results.cases);
     check_accuracy(results, rcond);
     results.seconds_solve =
         std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();

@@ -76,8 +76,13 @@ Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settin
     const fe::PointLocator locator(p.model);
     e.welds = weld_lines(c);
     const auto held = held_nodes(c, e.mesh, p, e.welds);
-    for (const analysis::CaseResult& r : e.results.cases) {
-        e.peaks.push_back(find_peaks(p, e.layout, c, r));
+    std::vector<const Eigen::VectorXd*> displacements;
+    for (const analysis::CaseResult& r : e.results.cases) displacements.push_back(&r.u);
+    // Every case's 3×3 Gauss-point stresses in one pass over the elements.
+    const std::vector<fe::SampledStresses> gauss = fe::sample_stresses(p.model, displacements, 3);
+    for (size_t k = 0; k < e.results.cases.size(); ++k) {
+        const analysis::CaseResult& r = e.results.cases[k];
+        e.peaks.push_back(find_peaks(p, e.layout, c, r, gauss[k]));
         std::vector<WeldForces> wf;
         for (size_t w = 0; w < e.welds.size(); ++w)
             wf.push_back(weld_forces(e.welds[w], e.mesh, r.dof_reactions, held[w]));
@@ -85,8 +90,6 @@ Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settin
     }
     // Each line's geometry (crossings, located points, free-body cut) once,
     // for every case.
-    std::vector<const Eigen::VectorXd*> displacements;
-    for (const analysis::CaseResult& r : e.results.cases) displacements.push_back(&r.u);
     e.section_stress.assign(e.results.cases.size(), {});
     for (size_t s = 0; s < e.sections.size(); ++s) {
         std::vector<SectionStress> per_case =

@@ -81,7 +81,8 @@ std::string describe_location(const analysis::PlateLayout& layout, const model::
 }
 
 PeakStress find_peaks(const analysis::FeProblem& problem, const analysis::PlateLayout& layout,
-                      const model::Connection& connection, const analysis::CaseResult& result) {
+                      const model::Connection& connection, const analysis::CaseResult& result,
+                      const fe::SampledStresses& g) {
     const double lowest = -std::numeric_limits<double>::infinity();
     Candidate vm{lowest, {0, 0}}, s1{lowest, {0, 0}},
         s2{std::numeric_limits<double>::infinity(), {0, 0}};
@@ -111,7 +112,6 @@ PeakStress find_peaks(const analysis::FeProblem& problem, const analysis::PlateL
     const fe::Model& model = problem.model;
     for (size_t n = 0; n < result.nodal_stress.size(); ++n)
         consider(result.nodal_stress[n], model.nodes[n]);
-    const fe::SampledStresses g = fe::sample_stresses(model, result.u, 3);
     for (size_t i = 0; i < g.stress.size(); ++i) consider(g.stress[i], g.point[i]);
 
     PeakStress peak;

@@ -5,6 +5,7 @@
 #include "analysis/plate_region.hpp"
 #include "analysis/results.hpp"
 #include "check/pipeline.hpp"
+#include "fe/stress.hpp"
 
 namespace lapwing::check {
 
@@ -22,8 +23,11 @@ namespace lapwing::check {
 // From the recovered nodal stresses and the Gauss-point stresses of the
 // plate elements, whichever is higher (recovery can overshoot or undershoot
 // at a free edge; both are shown to the same mesh).
+// `gauss` holds the case's stresses at the 3×3 Gauss points of every element
+// (fe::sample_stresses with 3 points per direction).
 PeakStress find_peaks(const analysis::FeProblem& problem, const analysis::PlateLayout& layout,
-                      const model::Connection& connection, const analysis::CaseResult& result);
+                      const model::Connection& connection, const analysis::CaseResult& result,
+                      const fe::SampledStresses& gauss);
 
 // "edge of hole brace[2]", "outline edge 3", or "(x, y) mm": the nearest
 // feature within a few element sizes of the point.

@@ -107,6 +107,11 @@ SampledStresses spr_samples(const Model& model, const Eigen::VectorXd& u) {
     return sample_stresses(model, u, 2);
 }
 
+std::vector<SampledStresses> spr_samples(const Model& model,
+                                         std::span<const Eigen::VectorXd* const> u) {
+    return sample_stresses(model, u, 2);
+}
+
 namespace {
 
 // The complete polynomial basis 1, X, Y, X², XY, Y² in a patch's local,
@@ -184,13 +189,15 @@ std::vector<Stress> SprRecovery::recover(const SampledStresses& samples) const {
     std::vector<Stress> sum(n_nodes, Stress::Zero());
     std::vector<int> count(n_nodes, 0);
     std::vector<unsigned char> rank(n_nodes, 0);
-    const auto offer = [&](size_t node, unsigned char r, const Stress& value) {
+    // `value` is called only where the node takes it: a node that already
+    // has a better kind of patch skips the fit's evaluation.
+    const auto offer = [&](size_t node, unsigned char r, const auto& value) {
         if (r > rank[node]) {
             rank[node] = r;
-            sum[node] = value;
+            sum[node] = value();
             count[node] = 1;
         } else if (r == rank[node] && r < 3) {
-            sum[node] += value;
+            sum[node] += value();
             ++count[node];
         }
     };
@@ -228,11 +235,11 @@ std::vector<Stress> SprRecovery::recover(const SampledStresses& samples) const {
             for (int k = 0; k < n; ++k) value += p(k) * c.row(k).transpose();
             return value;
         };
-        if (!patch.boundary) offer(v, 3, value_at(patch.vertex));
+        if (!patch.boundary) offer(v, 3, [&] { return value_at(patch.vertex); });
         const unsigned char r = patch.boundary ? 1 : 2;
         for (int e : elements)
             for (int node : nodes_of(model.elements[static_cast<size_t>(e)]))
-                offer(static_cast<size_t>(node), r, value_at(node));
+                offer(static_cast<size_t>(node), r, [&] { return value_at(node); });
     }
 
     for (size_t i = 0; i < n_nodes; ++i) {

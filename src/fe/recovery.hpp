@@ -21,6 +21,9 @@ std::vector<Stress> recover_by_averaging(const Model& model, const Eigen::Vector
 // IJNME 10:243), but 2×2 sampling with a linear fit keeps boundary patches
 // determined and gives effectivity indices near 1 in tests/verification.
 SampledStresses spr_samples(const Model& model, const Eigen::VectorXd& u);
+// The same for several displacement fields at once, one result per field.
+std::vector<SampledStresses> spr_samples(const Model& model,
+                                         std::span<const Eigen::VectorXd* const> u);
 
 // Superconvergent patch recovery (Zienkiewicz & Zhu 1992, IJNME 33:1331):
 // around every interior corner node, a least-squares fit of a complete

@@ -76,22 +76,58 @@ Stress element_stress(const Model& model, int e, const Eigen::VectorXd& u, doubl
     return out;
 }
 
+namespace {
+
+// One element's samples for every field: the strain operator B at each point
+// once, then σ = D B u_e per field (plus D B_α α for Q4i, whose α depends on
+// the field), the same arithmetic as element_stress.
+template <int n>
+void sample_element(const Model& model, int e, std::span<const Eigen::VectorXd* const> u,
+                    const std::vector<Vector2>& reference, const Matrix3& D, bool incompatible,
+                    std::vector<SampledStresses>& out) {
+    const Element& el = model.elements[static_cast<size_t>(e)];
+    const auto X = gather_coords<n>(model.nodes, std::span<const int>(el.nodes.data(), n));
+    std::vector<ElementVector<n>> u_e;
+    std::vector<Eigen::Vector4d> alpha;
+    for (const Eigen::VectorXd* field : u) {
+        u_e.push_back(gather_u<n>(el, *field));
+        if constexpr (n == 4)
+            if (incompatible)
+                alpha.push_back(stiffness_q4i(X, D, el.thickness, e).alpha_from_u * u_e.back());
+    }
+    for (const Vector2& p : reference) {
+        const ShapeAt<n> s = shape<n>(p.x(), p.y());
+        const StrainOperator<n> B =
+            strain_operator<n>(physical_derivatives<n>(s.dN_dxi, jacobian<n>(X, s.dN_dxi)));
+        for (size_t c = 0; c < u.size(); ++c) {
+            Strain eps = B * u_e[c];
+            if constexpr (n == 4)
+                if (incompatible)
+                    eps = Strain(eps + incompatible_strain_operator(X, p.x(), p.y()) * alpha[c]);
+            out[c].stress.push_back(D * eps);
+        }
+    }
+}
+
+} // namespace
+
 SampledStresses sample_stresses(const Model& model, const Eigen::VectorXd& u, int n) {
-    SampledStresses s;
+    const Eigen::VectorXd* field = &u;
+    return std::move(sample_stresses(model, std::span(&field, 1), n).front());
+}
+
+std::vector<SampledStresses> sample_stresses(const Model& model,
+                                             std::span<const Eigen::VectorXd* const> u, int n) {
+    SampledStresses geometry;
     const SquareRule rule = gauss_square(n);
-    s.points_per_element = rule.n_points;
+    geometry.points_per_element = rule.n_points;
     for (int q = 0; q < rule.n_points; ++q)
-        s.reference.emplace_back(rule.points[static_cast<size_t>(q)].xi,
-                                 rule.points[static_cast<size_t>(q)].eta);
+        geometry.reference.emplace_back(rule.points[static_cast<size_t>(q)].xi,
+                                        rule.points[static_cast<size_t>(q)].eta);
     const size_t total = model.elements.size() * static_cast<size_t>(rule.n_points);
-    s.point.reserve(total);
-    s.stress.reserve(total);
-    s.weight.reserve(total);
-    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
-        const Element& el = model.elements[static_cast<size_t>(e)];
-        const Matrix3 D = plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
-        for_each_strain(model, e, u, s.reference, D,
-                        [&](const Strain& eps) { s.stress.push_back(D * eps); });
+    geometry.point.reserve(total);
+    geometry.weight.reserve(total);
+    for (const Element& el : model.elements) {
         std::array<Vector2, 9> coords;
         for (int i = 0; i < node_count(el.kind); ++i)
             coords[static_cast<size_t>(i)] =
@@ -99,11 +135,29 @@ SampledStresses sample_stresses(const Model& model, const Eigen::VectorXd& u, in
         const std::span<const Vector2> c(coords.data(), static_cast<size_t>(node_count(el.kind)));
         for (int q = 0; q < rule.n_points; ++q) {
             const auto& p = rule.points[static_cast<size_t>(q)];
-            s.point.push_back(map_point(el.kind, c, p.xi, p.eta));
-            s.weight.push_back(el.thickness * det_J_at(el.kind, c, p.xi, p.eta) * p.w);
+            geometry.point.push_back(map_point(el.kind, c, p.xi, p.eta));
+            geometry.weight.push_back(el.thickness * det_J_at(el.kind, c, p.xi, p.eta) * p.w);
         }
     }
-    return s;
+    std::vector<SampledStresses> out(u.size(), geometry);
+    for (SampledStresses& s : out) s.stress.reserve(total);
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
+        const Element& el = model.elements[static_cast<size_t>(e)];
+        const Matrix3 D = plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
+        switch (el.kind) {
+        case ElementKind::Q4:
+        case ElementKind::Q4i:
+            sample_element<4>(model, e, u, geometry.reference, D, el.kind == ElementKind::Q4i, out);
+            break;
+        case ElementKind::Q8:
+            sample_element<8>(model, e, u, geometry.reference, D, false, out);
+            break;
+        case ElementKind::Q9:
+            sample_element<9>(model, e, u, geometry.reference, D, false, out);
+            break;
+        }
+    }
+    return out;
 }
 
 double von_mises(const Stress& s) {

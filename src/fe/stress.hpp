@@ -6,6 +6,7 @@
 #include "fe/model.hpp"
 
 #include <Eigen/Core>
+#include <span>
 #include <vector>
 
 namespace lapwing::fe {
@@ -23,6 +24,11 @@ struct SampledStresses {
 };
 SampledStresses sample_stresses(const Model& model, const Eigen::VectorXd& u,
                                 int gauss_points_per_direction);
+// The same for several displacement fields (load cases) at once, one result
+// per field: the points, weights and strain operators are computed once.
+std::vector<SampledStresses> sample_stresses(const Model& model,
+                                             std::span<const Eigen::VectorXd* const> u,
+                                             int gauss_points_per_direction);
 
 // Plane-stress von Mises: √(σx² − σxσy + σy² + 3τ²).
 double von_mises(const Stress& s);

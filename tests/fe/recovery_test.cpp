@@ -74,3 +74,41 @@ TEST_CASE("von Mises and principal stresses of known states") {
     // Equal biaxial: von Mises σ.
     CHECK(von_mises({120, 120, 0}) == lapwing::test::approx(120));
 }
+
+TEST_CASE("sampling several displacement fields at once gives each field's own samples, and a "
+          "uniform strain the plane-stress D ε at every point") {
+    // Uniform strain from linear displacements: every isoparametric element
+    // reproduces it exactly (the patch test, Irons; Hughes 1987 §3.8), and
+    // σ = E/(1−ν²) [εx + ν εy, εy + ν εx, (1−ν)/2 γxy] (plane stress,
+    // elementary elasticity).
+    const double E = 200000, nu = 0.3;
+    const double ex = 2e-4, ey = -1e-4, gxy = 3e-4;
+    for (ElementKind kind : lapwing::test::all_kinds) {
+        CAPTURE(name(kind));
+        const Model m = distorted_grid(kind);
+        Eigen::VectorXd uniform(m.n_dofs()), wavy(m.n_dofs());
+        for (int n = 0; n < m.n_nodes(); ++n) {
+            const Vector2& x = m.nodes[static_cast<size_t>(n)];
+            uniform(dof_ux(n)) = ex * x.x() + 0.5 * gxy * x.y();
+            uniform(dof_uy(n)) = ey * x.y() + 0.5 * gxy * x.x();
+            wavy(dof_ux(n)) = 1e-3 * std::sin(0.1 * x.x() + 0.2 * x.y());
+            wavy(dof_uy(n)) = 1e-3 * std::cos(0.15 * x.x() * x.y() / 40);
+        }
+        const std::vector<const Eigen::VectorXd*> fields = {&uniform, &wavy};
+        const std::vector<SampledStresses> both = sample_stresses(m, fields, 3);
+        REQUIRE(both.size() == 2);
+        for (size_t f = 0; f < 2; ++f) {
+            const SampledStresses alone = sample_stresses(m, *fields[f], 3);
+            REQUIRE(both[f].stress.size() == alone.stress.size());
+            for (size_t k = 0; k < alone.stress.size(); ++k) {
+                CHECK((both[f].stress[k] - alone.stress[k]).cwiseAbs().maxCoeff() == 0.0);
+                CHECK(both[f].point[k] == alone.point[k]);
+                CHECK(both[f].weight[k] == alone.weight[k]);
+            }
+        }
+        const Stress expected =
+            E / (1 - nu * nu) * Stress(ex + nu * ey, ey + nu * ex, 0.5 * (1 - nu) * gxy);
+        for (const Stress& s : both[0].stress)
+            CHECK((s - expected).cwiseAbs().maxCoeff() < 1e-9 * expected.cwiseAbs().maxCoeff());
+    }
+}
