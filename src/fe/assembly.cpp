@@ -50,6 +50,26 @@ int link_dofs(const LinkSpring& s, std::array<int, 18>& dofs, Eigen::Vector4d& c
     return 4;
 }
 
+// Whether every dof of a block is a free unknown (no constraint terms).
+bool all_free(const DofMap& map, const std::array<int, 18>& dofs, int n_dofs) {
+    for (int a = 0; a < n_dofs; ++a)
+        if (!map.is_free(dofs[static_cast<size_t>(a)])) return false;
+    return true;
+}
+
+// Calls f(a, b, position) with the value position of each lower-triangle
+// pair (a ≤ b) of a block of free dofs, in the order the scatter stores them.
+template <typename F>
+void for_each_position(const SparsePattern& pattern, const DofMap& map,
+                       const std::array<int, 18>& dofs, int n_dofs, F&& f) {
+    for (int b = 0; b < n_dofs; ++b)
+        for (int a = 0; a <= b; ++a) {
+            const int ua = map.unknown_of(dofs[static_cast<size_t>(a)]);
+            const int ub = map.unknown_of(dofs[static_cast<size_t>(b)]);
+            f(a, b, pattern.find(std::max(ua, ub), std::min(ua, ub)));
+        }
+}
+
 // Calls f(dofs, n_dofs) for every element, then every spring.
 template <typename F>
 void for_each_block(const Model& model, F&& f) {
@@ -128,8 +148,11 @@ Assembler::Assembler(const Model& model, const DofMap& map) : map_(&map) {
                              : model.rotation_nodes[static_cast<size_t>(dof - 2 * model.n_nodes())];
         pattern_.position[static_cast<size_t>(u)] = model.nodes[static_cast<size_t>(node)];
     }
+}
 
-    // Scatter positions for elements whose dofs are all free unknowns.
+// Scatter positions for elements whose dofs are all free unknowns.
+void Assembler::build_scatter(const Model& model) {
+    const DofMap& map = *map_;
     scatter_start_.assign(model.elements.size(), -1);
     std::array<int, 18> dofs{};
     size_t pairs = 0;
@@ -140,22 +163,17 @@ Assembler::Assembler(const Model& model, const DofMap& map) : map_(&map) {
     scatter_.reserve(pairs);
     for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
         const int n_dofs = element_dofs(model, e, dofs);
-        bool plain = true;
-        for (int a = 0; a < n_dofs && plain; ++a) plain = map.is_free(dofs[static_cast<size_t>(a)]);
-        if (!plain) continue;
+        if (!all_free(map, dofs, n_dofs)) continue;
         scatter_start_[static_cast<size_t>(e)] = static_cast<long>(scatter_.size());
-        for (int b = 0; b < n_dofs; ++b)
-            for (int a = 0; a <= b; ++a) {
-                const int ua = map.unknown_of(dofs[static_cast<size_t>(a)]);
-                const int ub = map.unknown_of(dofs[static_cast<size_t>(b)]);
-                scatter_.push_back(
-                    static_cast<int>(pattern_.find(std::max(ua, ub), std::min(ua, ub))));
-            }
+        for_each_position(pattern_, map, dofs, n_dofs, [&](int, int, long position) {
+            scatter_.push_back(static_cast<int>(position));
+        });
     }
 }
 
 void Assembler::assemble(const Model& model, std::vector<double>& values,
-                         Eigen::VectorXd& prescribed_load) const {
+                         Eigen::VectorXd& prescribed_load) {
+    if (++assemblies_ == 2) build_scatter(model);
     const DofMap& map = *map_;
     values.assign(static_cast<size_t>(pattern_.nnz()), 0.0);
     prescribed_load = Eigen::VectorXd::Zero(map.n_unknowns());
@@ -186,15 +204,24 @@ void Assembler::assemble(const Model& model, std::vector<double>& values,
     for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
         const Element& el = model.elements[static_cast<size_t>(e)];
         const int n_dofs = element_stiffness(model, e, D[static_cast<size_t>(el.material)], k);
-        const long start = scatter_start_[static_cast<size_t>(e)];
-        if (start >= 0) {
-            const int* position = scatter_.data() + start;
-            for (int b = 0; b < n_dofs; ++b)
-                for (int a = 0; a <= b; ++a) values[static_cast<size_t>(*position++)] += k(a, b);
-        } else {
-            element_dofs(model, e, dofs);
-            add_generic(dofs, n_dofs, k);
+        if (!scatter_start_.empty()) {
+            if (const long start = scatter_start_[static_cast<size_t>(e)]; start >= 0) {
+                const int* position = scatter_.data() + start;
+                for (int b = 0; b < n_dofs; ++b)
+                    for (int a = 0; a <= b; ++a)
+                        values[static_cast<size_t>(*position++)] += k(a, b);
+                continue;
+            }
         }
+        element_dofs(model, e, dofs);
+        if (!all_free(map, dofs, n_dofs)) {
+            add_generic(dofs, n_dofs, k);
+            continue;
+        }
+        // The positions build_scatter would store, found as they are used.
+        for_each_position(pattern_, map, dofs, n_dofs, [&](int a, int b, long position) {
+            values[static_cast<size_t>(position)] += k(a, b);
+        });
     }
     for (const Spring& s : model.springs) {
         const int n_dofs = spring_dofs(s, dofs);

@@ -38,8 +38,14 @@ public:
     // displacements put on the unknowns. The model must have the topology the
     // assembler was built with; coordinates, thicknesses and materials may
     // differ.
+    //
+    // The first assembly finds each entry's position in the pattern; the
+    // second and later ones (a sweep's variants, refactorizations) use the
+    // positions stored by the second, so a model assembled once never holds
+    // them (at 2·10⁶ Q8 dofs they would be 351 MB at the factorization's
+    // peak, docs/benchmarks.md). The values are the same either way.
     void assemble(const Model& model, std::vector<double>& values,
-                  Eigen::VectorXd& prescribed_load) const;
+                  Eigen::VectorXd& prescribed_load);
 
     // Internal forces K u at every dof of the model (elements and springs),
     // for each column of `displacements` (full dofs). Reactions follow as
@@ -57,11 +63,15 @@ public:
                    std::vector<double>& values) const;
 
 private:
+    void build_scatter(const Model& model);
+
     const DofMap* map_;
     SparsePattern pattern_;
+    int assemblies_ = 0;
     // For an element whose dofs are all free: the value positions of its
     // lower-triangle pairs (a ≤ b), consecutively; -1 start for the others.
-    // Positions fit an int: the pattern's column starts are ints.
+    // Positions fit an int: the pattern's column starts are ints. Empty
+    // until the second assembly.
     std::vector<long> scatter_start_;
     std::vector<int> scatter_;
 };

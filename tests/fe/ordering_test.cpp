@@ -180,7 +180,7 @@ TEST_CASE("nested dissection on a Q8 mesh matches AMD; without positions it fall
 
     // The same pattern without positions: node AMD, same solution.
     const DofMap map(m.n_dofs(), c);
-    const Assembler assembler(m, map);
+    Assembler assembler(m, map);
     SparsePattern bare = assembler.pattern();
     bare.position.clear();
     std::vector<double> values;
