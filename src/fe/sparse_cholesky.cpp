@@ -164,6 +164,19 @@ public:
         common_.supernodal = CHOLMOD_SUPERNODAL;
         common_.final_ll = 1;
         common_.print = 0;
+        // Supernodal amalgamation: CHOLMOD merges a child supernode into its
+        // parent when the merged one has at most nrelax[0..2] columns or at
+        // most zrelax[0..2] of its entries as explicit zeros (defaults 4, 16,
+        // 48 and 0.8, 0.1, 0.05; CHOLMOD User Guide, cholmod_super_symbolic).
+        // The zeros buy larger dense blocks, which pay with an optimised BLAS;
+        // with the reference BLAS they are only memory and flops. Tighter
+        // limits took the factor's peak at 2·10⁶ Q8 dofs from 3,936,080 to
+        // 3,863,168 KiB and the demo check's instructions down by 0.4–0.7 %
+        // (docs/benchmarks.md, 2026-12-03, third session).
+        common_.nrelax[1] = 8;
+        common_.nrelax[2] = 16;
+        common_.zrelax[1] = 0.02;
+        common_.zrelax[2] = 0.01;
         switch (ordering_) {
         case Ordering::automatic:
             break; // CHOLMOD's defaults
