@@ -4,6 +4,7 @@
 #include "analysis/bearing_share.hpp"
 #include "analysis/bolt_ties.hpp"
 #include "analysis/fastener_stiffness.hpp"
+#include "analysis/mesh_check.hpp"
 #include "core/error.hpp"
 
 #include <algorithm>
@@ -69,6 +70,7 @@ double hole_diameter(const model::Connection& c, const BoltModel& b) {
 
 FeProblem build_fe_problem(const model::Connection& c, const mesh::Mesh& mesh,
                            const PlateLayout& layout) {
+    check_mesh_not_folded(c, mesh, layout);
     FeProblem p;
     fe::Model& m = p.model;
     m.nodes.assign(mesh.nodes.begin(), mesh.nodes.end());
