@@ -102,6 +102,7 @@ std::vector<std::string> write_check_outputs(const fs::path& folder, const model
     if (wants(c, "html")) put("report.html", report::calc_sheet_html(o, run, parts.figures));
     if (wants(c, "json")) put("results.json", report::results_json(o, run, parts.figures));
     if (wants(c, "vtu")) put("model.vtu", parts.vtu);
+    if (wants(c, "csv")) put("checks.csv", report::checks_csv(o));
     if (c.report.figures)
         for (const report::Figure& f : parts.figures) put(f.file, f.svg);
     return written;

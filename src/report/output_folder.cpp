@@ -8,8 +8,9 @@ namespace lapwing::report {
 bool is_lapwing_output(const std::string& name) {
     if (name.starts_with(".") && name.find(".tmp-") != std::string::npos)
         return is_lapwing_output(name.substr(1, name.find(".tmp-") - 1));
-    for (const char* fixed : {"report.html", "results.json", "model.vtu", "geometry.svg",
-                              "mesh.svg", "contour.svg", "deformed.svg", "bolt-forces.svg"})
+    for (const char* fixed :
+         {"report.html", "results.json", "model.vtu", "checks.csv", "geometry.svg", "mesh.svg",
+          "contour.svg", "deformed.svg", "bolt-forces.svg"})
         if (name == fixed) return true;
     // Per-case figures (contour-CASE.svg, …) and section profiles; the
     // single-case names above are those of earlier versions.

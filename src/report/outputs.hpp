@@ -23,4 +23,9 @@ std::string results_json(const check::CheckOutcome& outcome, const RunInfo& run,
 // model.vtu: the mesh with displacements, stresses and von Mises per case.
 std::string model_vtu(const check::CheckOutcome& outcome);
 
+// checks.csv: the check table, one line per row (RFC 4180, CRLF line ends):
+// id, family, what, where, load_case, method, unit, demand, capacity, ratio
+// (both empty for an information row), status, governing ("yes" or empty).
+std::string checks_csv(const check::CheckOutcome& outcome);
+
 } // namespace lapwing::report

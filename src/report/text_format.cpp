@@ -47,4 +47,14 @@ std::string with_unit(double internal_value, Quantity quantity, UnitSystem units
     return label.empty() ? n : n + " " + label;
 }
 
+std::string csv_field(std::string_view text) {
+    if (text.find_first_of(",\"\n\r") == std::string_view::npos) return std::string(text);
+    std::string out = "\"";
+    for (char ch : text) {
+        if (ch == '"') out += '"';
+        out += ch;
+    }
+    return out + "\"";
+}
+
 } // namespace lapwing::report

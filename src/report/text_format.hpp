@@ -1,5 +1,5 @@
-// Small text helpers shared by the renderers: HTML/XML escaping and numbers
-// in the user's unit system with their unit label.
+// Small text helpers shared by the renderers: HTML/XML escaping, CSV fields,
+// and numbers in the user's unit system with their unit label.
 #pragma once
 
 #include "core/units.hpp"
@@ -19,5 +19,9 @@ std::string with_unit(double internal_value, Quantity quantity, UnitSystem units
 std::string number(double internal_value, Quantity quantity, UnitSystem units);
 // The label alone, e.g. "MPa"; empty for Quantity::none.
 std::string unit(Quantity quantity, UnitSystem units);
+
+// One CSV field (RFC 4180), quoted when it holds a comma, a quote or a line
+// end, with its quotes doubled.
+std::string csv_field(std::string_view text);
 
 } // namespace lapwing::report

@@ -26,16 +26,6 @@ std::string ratio_text(double r) {
 
 } // namespace
 
-std::string csv_field(std::string_view text) {
-    if (text.find_first_of(",\"\n\r") == std::string_view::npos) return std::string(text);
-    std::string out = "\"";
-    for (char ch : text) {
-        if (ch == '"') out += '"';
-        out += ch;
-    }
-    return out + "\"";
-}
-
 std::string csv_header(const std::vector<Axis>& axes, bool with_reports) {
     std::string out = "variant";
     for (const Axis& a : axes) out += "," + csv_field(a.name);

@@ -8,6 +8,7 @@
 // `lapwing merge` joins shard files by the variant column.
 #pragma once
 
+#include "report/text_format.hpp"
 #include "sweep/grid.hpp"
 #include "sweep/runner.hpp"
 
@@ -42,6 +43,6 @@ struct NamedCsv {
 std::string merge_sweep_csvs(const std::vector<NamedCsv>& shards, int expected_total = 0);
 
 // One CSV field, quoted when it holds a comma, a quote or a line end.
-std::string csv_field(std::string_view text);
+using report::csv_field;
 
 } // namespace lapwing::sweep

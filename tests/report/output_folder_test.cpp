@@ -9,9 +9,9 @@ using namespace lapwing::report;
 
 TEST_CASE("output folder: lapwing's own files and leftovers are recognised") {
     for (const char* name :
-         {"report.html", "results.json", "model.vtu", "contour.svg", "section-whitmore-brace.svg",
-          "contour-1.2D_1.6L.svg", "bolt-forces-wind-2.svg", ".deformed-D.svg.tmp-77",
-          ".report.html.tmp-1234"})
+         {"report.html", "results.json", "model.vtu", "checks.csv", "contour.svg",
+          "section-whitmore-brace.svg", "contour-1.2D_1.6L.svg", "bolt-forces-wind-2.svg",
+          ".deformed-D.svg.tmp-77", ".report.html.tmp-1234"})
         CHECK(is_lapwing_output(name));
     for (const char* name :
          {"notes.txt", "G3.toml", "report.html.bak", ".bashrc", "x.svg", "contour-D.png"})

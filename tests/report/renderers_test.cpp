@@ -14,6 +14,8 @@
 #include <fstream>
 #include <nlohmann/json.hpp>
 #include <sstream>
+#include <string>
+#include <vector>
 
 using namespace lapwing;
 
@@ -102,6 +104,67 @@ TEST_CASE("results.json: matches the analysis, and the bolts balance the member 
         }
     CHECK(fx == doctest::Approx(-260000).epsilon(1e-6));
     CHECK(std::abs(fy) < 1e-6 * 260000);
+}
+
+namespace {
+// The fields of one CSV line (RFC 4180: quoted fields may hold commas and
+// doubled quotes).
+std::vector<std::string> csv_fields(const std::string& line) {
+    std::vector<std::string> out(1);
+    bool quoted = false;
+    for (size_t i = 0; i < line.size(); ++i) {
+        const char ch = line[i];
+        if (quoted && ch == '"' && i + 1 < line.size() && line[i + 1] == '"')
+            out.back() += '"', ++i;
+        else if (ch == '"')
+            quoted = !quoted;
+        else if (ch == ',' && !quoted)
+            out.emplace_back();
+        else
+            out.back() += ch;
+    }
+    return out;
+}
+} // namespace
+
+TEST_CASE("checks.csv: one line per check row, quoted per RFC 4180, the values of results.json") {
+    const auto& o = lap_splice();
+    const std::string csv = report::checks_csv(o);
+    const auto j = nlohmann::json::parse(report::results_json(o, run_info()));
+    std::vector<std::string> lines;
+    for (size_t at = 0; at < csv.size();) {
+        const size_t end = csv.find("\r\n", at);
+        REQUIRE(end != std::string::npos); // every line ends in CRLF (RFC 4180 §2)
+        lines.push_back(csv.substr(at, end - at));
+        at = end + 2;
+    }
+    REQUIRE(lines.size() == o.table.rows.size() + 1);
+    const std::vector<std::string> header = csv_fields(lines[0]);
+    REQUIRE(header.size() == 12);
+    CHECK(header[0] == "id");
+    CHECK(header[11] == "governing");
+    int governing = 0;
+    for (size_t i = 0; i < o.table.rows.size(); ++i) {
+        const std::vector<std::string> f = csv_fields(lines[i + 1]);
+        const auto& row = j["checks"]["rows"][i];
+        REQUIRE(f.size() == 12);
+        CHECK(f[0] == row["id"].get<std::string>());
+        CHECK(f[2] == row["what"].get<std::string>()); // commas and all
+        CHECK(f[6] == row["unit"].get<std::string>());
+        // Shortest round-trip text: the same doubles as results.json.
+        CHECK(std::stod(f[7]) == row["demand"].get<double>());
+        if (row["capacity"].is_null()) {
+            CHECK(f[8].empty());
+            CHECK(f[9].empty());
+        } else {
+            CHECK(std::stod(f[8]) == row["capacity"].get<double>());
+            CHECK(std::stod(f[9]) == row["ratio"].get<double>());
+        }
+        CHECK(f[10] == row["status"].get<std::string>());
+        governing += f[11] == "yes";
+    }
+    CHECK(governing == 1);
+    CHECK(csv.find("\"") != std::string::npos); // some field needed quoting
 }
 
 TEST_CASE("model.vtu: counts, cell type 23 for Q8, one displacement array per case") {
