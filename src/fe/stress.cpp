@@ -22,69 +22,13 @@ ElementVector<n> gather_u(const Element& el, const Eigen::VectorXd& u) {
     return u_e;
 }
 
-template <int n>
-Strain strain_at(const NodeCoords<n>& X, const ElementVector<n>& u_e, double xi, double eta) {
-    const ShapeAt<n> s = shape<n>(xi, eta);
-    const Jacobian J = jacobian<n>(X, s.dN_dxi);
-    return strain_operator<n>(physical_derivatives<n>(s.dN_dxi, J)) * u_e;
-}
-
-// Calls f(strain at (ξ, η)) for each of `points`, with element data computed once.
-template <typename F>
-void for_each_strain(const Model& model, int e, const Eigen::VectorXd& u,
-                     const std::vector<Vector2>& points, const Matrix3& D, F&& f) {
-    const Element& el = model.elements[static_cast<size_t>(e)];
-    const std::span<const int> nodes(el.nodes.data(), static_cast<size_t>(node_count(el.kind)));
-    switch (el.kind) {
-    case ElementKind::Q4: {
-        const auto X = gather_coords<4>(model.nodes, nodes);
-        const auto u_e = gather_u<4>(el, u);
-        for (const Vector2& p : points) f(strain_at<4>(X, u_e, p.x(), p.y()));
-        break;
-    }
-    case ElementKind::Q4i: {
-        const auto X = gather_coords<4>(model.nodes, nodes);
-        const auto u_e = gather_u<4>(el, u);
-        const Eigen::Vector4d alpha = stiffness_q4i(X, D, el.thickness, e).alpha_from_u * u_e;
-        for (const Vector2& p : points)
-            f(Strain(strain_at<4>(X, u_e, p.x(), p.y()) +
-                     incompatible_strain_operator(X, p.x(), p.y()) * alpha));
-        break;
-    }
-    case ElementKind::Q8: {
-        const auto X = gather_coords<8>(model.nodes, nodes);
-        const auto u_e = gather_u<8>(el, u);
-        for (const Vector2& p : points) f(strain_at<8>(X, u_e, p.x(), p.y()));
-        break;
-    }
-    case ElementKind::Q9: {
-        const auto X = gather_coords<9>(model.nodes, nodes);
-        const auto u_e = gather_u<9>(el, u);
-        for (const Vector2& p : points) f(strain_at<9>(X, u_e, p.x(), p.y()));
-        break;
-    }
-    }
-}
-
-} // namespace
-
-Stress element_stress(const Model& model, int e, const Eigen::VectorXd& u, double xi, double eta) {
-    const Element& el = model.elements[static_cast<size_t>(e)];
-    const Matrix3 D = plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
-    Stress out = Stress::Zero();
-    for_each_strain(model, e, u, {Vector2(xi, eta)}, D, [&](const Strain& eps) { out = D * eps; });
-    return out;
-}
-
-namespace {
-
-// One element's samples for every field: the strain operator B at each point
-// once, then σ = D B u_e per field (plus D B_α α for Q4i, whose α depends on
-// the field), the same arithmetic as element_stress.
-template <int n>
-void sample_element(const Model& model, int e, std::span<const Eigen::VectorXd* const> u,
-                    const std::vector<Vector2>& reference, const Matrix3& D, bool incompatible,
-                    std::vector<SampledStresses>& out) {
+// One element's stresses at `points` for every field: the strain operator B
+// at each point once, then σ = D B u_e per field (plus D B_α α for Q4i,
+// whose α depends on the field). Calls f(field, point, σ), point by point.
+template <int n, typename F>
+void element_stresses(const Model& model, int e, std::span<const Eigen::VectorXd* const> u,
+                      const std::vector<Vector2>& points, const Matrix3& D, bool incompatible,
+                      F&& f) {
     const Element& el = model.elements[static_cast<size_t>(e)];
     const auto X = gather_coords<n>(model.nodes, std::span<const int>(el.nodes.data(), n));
     std::vector<ElementVector<n>> u_e;
@@ -95,21 +39,52 @@ void sample_element(const Model& model, int e, std::span<const Eigen::VectorXd* 
             if (incompatible)
                 alpha.push_back(stiffness_q4i(X, D, el.thickness, e).alpha_from_u * u_e.back());
     }
-    for (const Vector2& p : reference) {
+    for (size_t q = 0; q < points.size(); ++q) {
+        const Vector2& p = points[q];
         const ShapeAt<n> s = shape<n>(p.x(), p.y());
         const StrainOperator<n> B =
             strain_operator<n>(physical_derivatives<n>(s.dN_dxi, jacobian<n>(X, s.dN_dxi)));
+        Eigen::Matrix<double, 3, 4> B_alpha = Eigen::Matrix<double, 3, 4>::Zero();
+        if constexpr (n == 4)
+            if (incompatible) B_alpha = incompatible_strain_operator(X, p.x(), p.y());
         for (size_t c = 0; c < u.size(); ++c) {
             Strain eps = B * u_e[c];
             if constexpr (n == 4)
-                if (incompatible)
-                    eps = Strain(eps + incompatible_strain_operator(X, p.x(), p.y()) * alpha[c]);
-            out[c].stress.push_back(D * eps);
+                if (incompatible) eps = Strain(eps + B_alpha * alpha[c]);
+            f(c, q, Stress(D * eps));
         }
     }
 }
 
+// element_stresses for the element's kind.
+template <typename F>
+void element_stresses(const Model& model, int e, std::span<const Eigen::VectorXd* const> u,
+                      const std::vector<Vector2>& points, F&& f) {
+    const Element& el = model.elements[static_cast<size_t>(e)];
+    const Matrix3 D = plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
+    switch (el.kind) {
+    case ElementKind::Q4:
+    case ElementKind::Q4i:
+        element_stresses<4>(model, e, u, points, D, el.kind == ElementKind::Q4i, f);
+        break;
+    case ElementKind::Q8:
+        element_stresses<8>(model, e, u, points, D, false, f);
+        break;
+    case ElementKind::Q9:
+        element_stresses<9>(model, e, u, points, D, false, f);
+        break;
+    }
+}
+
 } // namespace
+
+Stress element_stress(const Model& model, int e, const Eigen::VectorXd& u, double xi, double eta) {
+    const Eigen::VectorXd* field = &u;
+    Stress out = Stress::Zero();
+    element_stresses(model, e, std::span(&field, 1), {Vector2(xi, eta)},
+                     [&](size_t, size_t, const Stress& sigma) { out = sigma; });
+    return out;
+}
 
 SampledStresses sample_stresses(const Model& model, const Eigen::VectorXd& u, int n) {
     const Eigen::VectorXd* field = &u;
@@ -141,22 +116,10 @@ std::vector<SampledStresses> sample_stresses(const Model& model,
     }
     std::vector<SampledStresses> out(u.size(), geometry);
     for (SampledStresses& s : out) s.stress.reserve(total);
-    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
-        const Element& el = model.elements[static_cast<size_t>(e)];
-        const Matrix3 D = plane_stress_D(model.materials[static_cast<size_t>(el.material)]);
-        switch (el.kind) {
-        case ElementKind::Q4:
-        case ElementKind::Q4i:
-            sample_element<4>(model, e, u, geometry.reference, D, el.kind == ElementKind::Q4i, out);
-            break;
-        case ElementKind::Q8:
-            sample_element<8>(model, e, u, geometry.reference, D, false, out);
-            break;
-        case ElementKind::Q9:
-            sample_element<9>(model, e, u, geometry.reference, D, false, out);
-            break;
-        }
-    }
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e)
+        element_stresses(
+            model, e, u, geometry.reference,
+            [&](size_t c, size_t, const Stress& sigma) { out[c].stress.push_back(sigma); });
     return out;
 }
 
