@@ -10,6 +10,7 @@
 #include <chrono>
 #include <cmath>
 #include <fmt/format.h>
+#include <functional>
 #include <numbers>
 #include <optional>
 #include <set>
@@ -244,8 +245,10 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
 
     fe::Model working = p.model;
     // Contact: the cases' loads and the order to solve them in, and each
-    // case's seeded start set (empty without one), known before the first
-    // factorization so that it can be made with the first case's start.
+    // case's seeded start set (empty without one). The first case's is
+    // fetched once the pattern and the ordering are made (the seed may come
+    // from an analysis still running on another thread), so that the first
+    // factorization is made with the first case's start.
     std::vector<fe::Loads> case_loads;
     std::vector<size_t> contact_order;
     std::vector<double> k0(working.link_springs.size());
@@ -263,15 +266,21 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         for (const CaseSpec& spec : specs)
             case_loads.push_back(loads_for(c, mesh, p, spec.factors));
         contact_order = similar_first_order(working, case_loads);
+    }
+    bool seed_first = p.has_contact; // until the first start set is fetched
+    const std::function<void()> start_first = [&] {
+        if (!seed_first) return;
+        seed_first = false;
         first_start = seeded_start(contact_order.front());
         for (size_t j = 0; j < k0.size() && !first_start.empty(); ++j)
             working.link_springs[j].k = first_start[j] ? k0[j] : 0.0;
-    }
+    };
     std::optional<fe::LinearStaticProblem> own_solver;
     fe::LinearStaticProblem* solver = nullptr;
     const auto make_solver = [&] {
-        solver = reuse ? &reuse->problem_for(working, p.constraints)
-                       : &own_solver.emplace(working, p.constraints);
+        solver =
+            reuse ? &reuse->problem_for(working, p.constraints, start_first)
+                  : &own_solver.emplace(working, p.constraints, fe::SolverOptions{}, start_first);
     };
     try {
         try {

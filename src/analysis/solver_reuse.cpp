@@ -48,10 +48,12 @@ std::string topology_key(const fe::Model& model, const fe::Constraints& constrai
 }
 
 fe::LinearStaticProblem& SolverReuse::problem_for(const fe::Model& model,
-                                                  const fe::Constraints& constraints) {
+                                                  const fe::Constraints& constraints,
+                                                  const std::function<void()>& before_values) {
     std::string key = topology_key(model, constraints);
     if (problem_ && key == key_) {
         try {
+            if (before_values) before_values();
             problem_->refactorize(model);
         } catch (...) {
             // A failed factorization leaves no state worth keeping.
@@ -64,7 +66,8 @@ fe::LinearStaticProblem& SolverReuse::problem_for(const fe::Model& model,
     }
     problem_.reset();
     key_.clear();
-    problem_ = std::make_unique<fe::LinearStaticProblem>(model, constraints);
+    problem_ = std::make_unique<fe::LinearStaticProblem>(model, constraints, fe::SolverOptions{},
+                                                         before_values);
     key_ = std::move(key);
     ++n_built_;
     return *problem_;

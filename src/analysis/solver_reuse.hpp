@@ -9,6 +9,7 @@
 #include "fe/linear_static.hpp"
 #include "fe/model.hpp"
 
+#include <functional>
 #include <memory>
 #include <string>
 
@@ -20,10 +21,12 @@ public:
     // model's values. The kept problem is reused when the topology (elements,
     // springs, link springs, rotation dofs) and the constraints equal those
     // it was built for; otherwise a new one replaces it. The problem refers
-    // to `model` until the next call. Throws AnalysisError as the
-    // LinearStaticProblem constructor does.
-    fe::LinearStaticProblem& problem_for(const fe::Model& model,
-                                         const fe::Constraints& constraints);
+    // to `model` until the next call. `before_values` is called before the
+    // values are assembled, after the pattern and the ordering where they
+    // are built (the LinearStaticProblem constructor's). Throws AnalysisError
+    // as that constructor does.
+    fe::LinearStaticProblem& problem_for(const fe::Model& model, const fe::Constraints& constraints,
+                                         const std::function<void()>& before_values = {});
 
     int n_built() const { return n_built_; }
     int n_reused() const { return n_reused_; }

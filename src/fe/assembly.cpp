@@ -81,6 +81,28 @@ void for_each_block(const Model& model, F&& f) {
     for (const LinkSpring& s : model.link_springs) f(dofs, link_dofs(s, dofs, c));
 }
 
+// K̃_ij += T_ai k_ab T_bj over all ordered (a, b) with i ≥ j, and the
+// prescribed load −T_ai k_ab g_b: any block, constrained dofs included.
+template <typename Block>
+void add_generic(const SparsePattern& pattern, const DofMap& map, const std::array<int, 18>& dofs,
+                 int n_dofs, const Block& k, std::vector<double>& values,
+                 Eigen::VectorXd& prescribed_load) {
+    for (int a = 0; a < n_dofs; ++a)
+        for (int b = 0; b < n_dofs; ++b) {
+            const double k_ab = k(a, b);
+            if (k_ab == 0.0) continue;
+            const int da = dofs[static_cast<size_t>(a)], db = dofs[static_cast<size_t>(b)];
+            const double g_b = map.offset(db);
+            for (const auto& ta : map.terms(da)) {
+                if (g_b != 0.0) prescribed_load(ta.unknown) -= ta.coefficient * k_ab * g_b;
+                for (const auto& tb : map.terms(db))
+                    if (ta.unknown >= tb.unknown)
+                        values[static_cast<size_t>(pattern.find(ta.unknown, tb.unknown))] +=
+                            ta.coefficient * tb.coefficient * k_ab;
+            }
+        }
+}
+
 } // namespace
 
 Assembler::Assembler(const Model& model, const DofMap& map) : map_(&map) {
@@ -173,31 +195,18 @@ void Assembler::build_scatter(const Model& model) {
 
 void Assembler::assemble(const Model& model, std::vector<double>& values,
                          Eigen::VectorXd& prescribed_load) {
+    assemble_all_but_links(model, values, prescribed_load);
+    add_link_springs(model, values, prescribed_load);
+}
+
+void Assembler::assemble_all_but_links(const Model& model, std::vector<double>& values,
+                                       Eigen::VectorXd& prescribed_load) {
     if (++assemblies_ == 2) build_scatter(model);
     const DofMap& map = *map_;
     values.assign(static_cast<size_t>(pattern_.nnz()), 0.0);
     prescribed_load = Eigen::VectorXd::Zero(map.n_unknowns());
     std::vector<Matrix3> D(model.materials.size());
     for (size_t m = 0; m < D.size(); ++m) D[m] = plane_stress_D(model.materials[m]);
-
-    // Generic path: K̃_ij += T_ai k_ab T_bj over all ordered (a, b) with i ≥ j,
-    // and the prescribed load −T_ai k_ab g_b.
-    auto add_generic = [&](const std::array<int, 18>& dofs, int n_dofs, const auto& k) {
-        for (int a = 0; a < n_dofs; ++a)
-            for (int b = 0; b < n_dofs; ++b) {
-                const double k_ab = k(a, b);
-                if (k_ab == 0.0) continue;
-                const int da = dofs[static_cast<size_t>(a)], db = dofs[static_cast<size_t>(b)];
-                const double g_b = map.offset(db);
-                for (const auto& ta : map.terms(da)) {
-                    if (g_b != 0.0) prescribed_load(ta.unknown) -= ta.coefficient * k_ab * g_b;
-                    for (const auto& tb : map.terms(db))
-                        if (ta.unknown >= tb.unknown)
-                            values[static_cast<size_t>(pattern_.find(ta.unknown, tb.unknown))] +=
-                                ta.coefficient * tb.coefficient * k_ab;
-                }
-            }
-    };
 
     ElementMatrixStorage k;
     std::array<int, 18> dofs{};
@@ -215,7 +224,7 @@ void Assembler::assemble(const Model& model, std::vector<double>& values,
         }
         element_dofs(model, e, dofs);
         if (!all_free(map, dofs, n_dofs)) {
-            add_generic(dofs, n_dofs, k);
+            add_generic(pattern_, map, dofs, n_dofs, k, values, prescribed_load);
             continue;
         }
         // The positions build_scatter would store, found as they are used.
@@ -227,13 +236,18 @@ void Assembler::assemble(const Model& model, std::vector<double>& values,
         const int n_dofs = spring_dofs(s, dofs);
         Eigen::Matrix2d ks;
         ks << s.k, -s.k, -s.k, s.k;
-        add_generic(dofs, n_dofs, ks);
+        add_generic(pattern_, map, dofs, n_dofs, ks, values, prescribed_load);
     }
+}
+
+void Assembler::add_link_springs(const Model& model, std::vector<double>& values,
+                                 Eigen::VectorXd& prescribed_load) const {
+    std::array<int, 18> dofs{};
     Eigen::Vector4d c;
     for (const LinkSpring& s : model.link_springs) {
         const int n_dofs = link_dofs(s, dofs, c);
         const Eigen::Matrix4d kl = s.k * c * c.transpose();
-        add_generic(dofs, n_dofs, kl);
+        add_generic(pattern_, *map_, dofs, n_dofs, kl, values, prescribed_load);
     }
 }
 

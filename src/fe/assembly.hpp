@@ -46,6 +46,13 @@ public:
     // docs/benchmarks.md). The values are the same either way.
     void assemble(const Model& model, std::vector<double>& values,
                   Eigen::VectorXd& prescribed_load);
+    // assemble() in its two parts, the link springs last, for a caller that
+    // learns the link springs' stiffness late (a contact start set from
+    // another thread): the values are the same bit for bit.
+    void assemble_all_but_links(const Model& model, std::vector<double>& values,
+                                Eigen::VectorXd& prescribed_load);
+    void add_link_springs(const Model& model, std::vector<double>& values,
+                          Eigen::VectorXd& prescribed_load) const;
 
     // Internal forces K u at every dof of the model (elements and springs),
     // for each column of `displacements` (full dofs). Reactions follow as

@@ -36,7 +36,8 @@ Eigen::VectorXd applied_forces(const Model& model, const Loads& loads) {
 }
 
 LinearStaticProblem::LinearStaticProblem(const Model& model, Constraints constraints,
-                                         SolverOptions options)
+                                         SolverOptions options,
+                                         const std::function<void()>& before_values)
     : model_(&model), constraints_(std::move(constraints)), map_(model.n_dofs(), constraints_),
       cholesky_(make_sparse_cholesky(options)) {
     if (map_.n_unknowns() == 0)
@@ -47,7 +48,20 @@ LinearStaticProblem::LinearStaticProblem(const Model& model, Constraints constra
     stats_.n_dofs = model.n_dofs();
     stats_.n_unknowns = map_.n_unknowns();
     cholesky_->analyse(assembler_->pattern());
-    assemble_and_factorize();
+    if (!before_values) {
+        assemble_and_factorize();
+        return;
+    }
+    // The values that before_values cannot change are assembled first, so
+    // that a wait in it overlaps them too.
+    const auto assembly = std::chrono::steady_clock::now();
+    assembler_->assemble_all_but_links(model, values_, prescribed_load_);
+    const double seconds = seconds_since(assembly);
+    before_values();
+    const auto links = std::chrono::steady_clock::now();
+    assembler_->add_link_springs(model, values_, prescribed_load_);
+    stats_.seconds_assemble = seconds + seconds_since(links);
+    check_and_factorize();
 }
 
 void LinearStaticProblem::refactorize(const Model& model) {
@@ -59,6 +73,10 @@ void LinearStaticProblem::assemble_and_factorize() {
     const auto start = std::chrono::steady_clock::now();
     assembler_->assemble(*model_, values_, prescribed_load_);
     stats_.seconds_assemble = seconds_since(start);
+    check_and_factorize();
+}
+
+void LinearStaticProblem::check_and_factorize() {
 
     const auto free =
         free_rigid_motions(*model_, map_, constraints_, assembler_->pattern(), values_);

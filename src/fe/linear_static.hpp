@@ -10,6 +10,7 @@
 #include "fe/model.hpp"
 #include "fe/sparse_cholesky.hpp"
 
+#include <functional>
 #include <memory>
 #include <span>
 #include <vector>
@@ -42,7 +43,16 @@ public:
     // refers to its own members, so it is neither copied nor moved). Throws
     // AnalysisError when the model is not restrained against rigid-body
     // motion, has a mechanism, or has an inverted element.
-    LinearStaticProblem(const Model& model, Constraints constraints, SolverOptions options = {});
+    //
+    // `before_values`, when given, is called once the sparse pattern and the
+    // fill-reducing ordering are made (they depend on the topology alone)
+    // and before the values are assembled: it may change the model's values
+    // and may block, e.g. until a contact start set computed on another
+    // thread exists, so that the pattern work overlaps the wait. It may
+    // change only the link springs' stiffness: the rest of the values is
+    // assembled before it is called.
+    LinearStaticProblem(const Model& model, Constraints constraints, SolverOptions options = {},
+                        const std::function<void()>& before_values = {});
 
     // Same topology, new values (coordinates, thickness, materials, springs):
     // reassemble and refactorize, reusing the pattern and the ordering.
@@ -83,6 +93,8 @@ public:
 
 private:
     void assemble_and_factorize();
+    // The support check and the factorization of the assembled values.
+    void check_and_factorize();
     std::vector<Solution> solutions(const Eigen::MatrixXd& f_full, const Eigen::MatrixXd& f_reduced,
                                     const Eigen::MatrixXd& u_reduced) const;
 
