@@ -11,9 +11,11 @@
 #include <cmath>
 #include <fmt/format.h>
 #include <functional>
+#include <future>
 #include <numbers>
 #include <optional>
 #include <set>
+#include <span>
 
 namespace lapwing::analysis {
 
@@ -219,6 +221,32 @@ std::vector<size_t> similar_first_order(const fe::Model& model,
     return order;
 }
 
+// Where to split the order of contact cases into two chains, one per
+// thread: before the case whose start set (seed) differs most from the one
+// before it, the nearer the middle among equals, so that the largest change
+// of set becomes the second chain's start instead of a factor modification
+// on the way. The order's size (no split) when a case has no seed.
+size_t chain_split(const std::vector<size_t>& order,
+                   const std::function<std::vector<bool>(size_t)>& seed_of) {
+    std::vector<std::vector<bool>> seeds;
+    for (const size_t i : order) {
+        seeds.push_back(seed_of(i));
+        if (seeds.back().empty()) return order.size();
+    }
+    size_t split = order.size(), most = 0;
+    double off_middle = 0;
+    for (size_t k = 1; k < order.size(); ++k) {
+        size_t changed = 0;
+        for (size_t j = 0; j < seeds[k].size() && j < seeds[k - 1].size(); ++j)
+            changed += seeds[k][j] != seeds[k - 1][j];
+        const double off =
+            std::abs(static_cast<double>(k) - 0.5 * static_cast<double>(order.size()));
+        if (split == order.size() || changed > most || (changed == most && off < off_middle))
+            split = k, most = changed, off_middle = off;
+    }
+    return split;
+}
+
 } // namespace
 
 Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateLayout& layout) {
@@ -343,79 +371,109 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         // this mesh, changed where the two cases' seeds differ: the mapping
         // of a seed can be off by a node at the edges of a contact arc,
         // which this mesh's own previous set has right.
-        std::vector<bool> start_set(k0.size(), true);
-        size_t previous = contact_order.front();
-        for (const size_t i : contact_order) {
-            CaseResult& out = results.cases[i];
-            out.name = specs[i].name;
-            out.combination = specs[i].combination;
-            const fe::Loads& loads = case_loads[i];
-            std::vector<bool> active = start_set;
-            if (i == contact_order.front()) {
-                if (!first_start.empty()) active = first_start;
-            } else {
-                const std::vector<bool>& now = seeded_start(i);
-                const std::vector<bool>& before = seeded_start(previous);
-                if (!now.empty() && !before.empty())
-                    for (size_t j = 0; j < active.size(); ++j)
-                        if (now[j] != before[j]) active[j] = now[j];
-            }
-            previous = i;
-            std::set<std::vector<bool>> seen;
-            bool settled = false;
-            Eigen::VectorXd unknowns; // of the last pass, on the current factor
-            for (int iteration = 1; iteration <= max_contact_iterations; ++iteration) {
-                for (size_t j = 0; j < k0.size(); ++j)
-                    working.link_springs[j].k = active[j] ? k0[j] : 0.0;
-                try {
-                    solver->update_link_springs(working);
-                } catch (const AnalysisError& e) {
-                    rethrow_in_connection_terms(c, p, e);
+        //
+        // Where the caller has a core to spare (hooks->threads > 1) and every
+        // case has a seed, the cases settle as two chains on two threads: the
+        // order splits where consecutive cases' seeds differ most, and the
+        // second chain starts on a copy of the first factorization, from its
+        // first case's seed. Each chain is the same sequence of passes
+        // whatever the threads' timing, so the results do not depend on it.
+        const auto run_chain = [&](std::span<const size_t> chain,
+                                   fe::LinearStaticProblem& chain_solver, fe::Model& chain_model) {
+            double chain_rcond = chain_solver.stats().factor.rcond;
+            std::vector<bool> start_set(k0.size(), true);
+            size_t previous = chain.front();
+            for (const size_t i : chain) {
+                CaseResult& out = results.cases[i];
+                out.name = specs[i].name;
+                out.combination = specs[i].combination;
+                const fe::Loads& loads = case_loads[i];
+                std::vector<bool> active = start_set;
+                if (i == chain.front()) {
+                    const std::vector<bool>& seed =
+                        i == contact_order.front() ? first_start : seeded_start(i);
+                    if (!seed.empty()) active = seed;
+                } else {
+                    const std::vector<bool>& now = seeded_start(i);
+                    const std::vector<bool>& before = seeded_start(previous);
+                    if (!now.empty() && !before.empty())
+                        for (size_t j = 0; j < active.size(); ++j)
+                            if (now[j] != before[j]) active[j] = now[j];
                 }
-                unknowns = solver->unknowns(loads);
-                const Eigen::VectorXd u = solver->dof_map().expand(unknowns);
-                seen.insert(active);
-                const double tol = 1e-9 * std::max(1e-30, u.cwiseAbs().maxCoeff());
-                std::vector<bool> next = active;
-                for (size_t j = 0; j < k0.size(); ++j) {
-                    const double g = gap(working.link_springs[j], u);
-                    if (active[j] && g > tol) next[j] = false;  // pulling apart: no contact
-                    if (!active[j] && g < -tol) next[j] = true; // closing in: contact
+                previous = i;
+                std::set<std::vector<bool>> seen;
+                bool settled = false;
+                Eigen::VectorXd unknowns; // of the last pass, on the current factor
+                for (int iteration = 1; iteration <= max_contact_iterations; ++iteration) {
+                    for (size_t j = 0; j < k0.size(); ++j)
+                        chain_model.link_springs[j].k = active[j] ? k0[j] : 0.0;
+                    try {
+                        chain_solver.update_link_springs(chain_model);
+                    } catch (const AnalysisError& e) {
+                        rethrow_in_connection_terms(c, p, e);
+                    }
+                    unknowns = chain_solver.unknowns(loads);
+                    const Eigen::VectorXd u = chain_solver.dof_map().expand(unknowns);
+                    seen.insert(active);
+                    const double tol = 1e-9 * std::max(1e-30, u.cwiseAbs().maxCoeff());
+                    std::vector<bool> next = active;
+                    for (size_t j = 0; j < k0.size(); ++j) {
+                        const double g = gap(chain_model.link_springs[j], u);
+                        if (active[j] && g > tol) next[j] = false;  // pulling apart: no contact
+                        if (!active[j] && g < -tol) next[j] = true; // closing in: contact
+                    }
+                    out.contact_iterations = iteration;
+                    if (next == active) {
+                        settled = true;
+                        break;
+                    }
+                    if (seen.count(next))
+                        throw AnalysisError(fmt::format(
+                            "bearing contact in load case \"{}\" does not settle: the set of "
+                            "contacting hole nodes cycles after {} passes; use the spread tie "
+                            "for the bolt groups of this case",
+                            out.name, iteration));
+                    active = std::move(next);
                 }
-                out.contact_iterations = iteration;
-                if (next == active) {
-                    settled = true;
-                    break;
-                }
-                if (seen.count(next))
+                if (!settled)
                     throw AnalysisError(fmt::format(
-                        "bearing contact in load case \"{}\" does not settle: the set of "
-                        "contacting hole nodes cycles after {} passes; use the spread tie "
-                        "for the bolt groups of this case",
-                        out.name, iteration));
-                active = std::move(next);
-            }
-            if (!settled)
-                throw AnalysisError(
-                    fmt::format("bearing contact in load case \"{}\" did not settle in {} passes",
-                                out.name, max_contact_iterations));
-            // The settled pass solved on the factor of the settled set: its
-            // unknowns are the solution, checked by their residual.
-            fe::Solution s =
-                named(specs, {i}, [&] { return solver->solution_of(loads, unknowns); });
-            if (!(s.relative_residual <= 1e-10)) {
-                try {
-                    solver->refactorize(working);
-                } catch (const AnalysisError& e) {
-                    rethrow_in_connection_terms(c, p, e);
+                        "bearing contact in load case \"{}\" did not settle in {} passes", out.name,
+                        max_contact_iterations));
+                // The settled pass solved on the factor of the settled set: its
+                // unknowns are the solution, checked by their residual.
+                fe::Solution s =
+                    named(specs, {i}, [&] { return chain_solver.solution_of(loads, unknowns); });
+                if (!(s.relative_residual <= 1e-10)) {
+                    try {
+                        chain_solver.refactorize(chain_model);
+                    } catch (const AnalysisError& e) {
+                        rethrow_in_connection_terms(c, p, e);
+                    }
+                    s = solve_named(chain_solver, std::span(&loads, 1), specs, {i}).front();
                 }
-                s = solve_named(*solver, std::span(&loads, 1), specs, {i}).front();
+                chain_rcond = std::min(chain_rcond, chain_solver.stats().factor.rcond);
+                start_set = active;
+                out.contact_closed.assign(active.begin(), active.end());
+                if (hooks && hooks->settled) hooks->settled(i, contact_seed(p, active, s.u));
+                fill_case(c, p, chain_model, s, specs[i].factors, out);
             }
-            rcond = std::min(rcond, solver->stats().factor.rcond);
-            start_set = active;
-            out.contact_closed.assign(active.begin(), active.end());
-            if (hooks && hooks->settled) hooks->settled(i, contact_seed(p, active, s.u));
-            fill_case(c, p, working, s, specs[i].factors, out);
+            return chain_rcond;
+        };
+        const size_t split = hooks && hooks->threads > 1 ? chain_split(contact_order, seeded_start)
+                                                         : contact_order.size();
+        const std::span<const size_t> order(contact_order);
+        fe::Model second_working = working;
+        std::unique_ptr<fe::LinearStaticProblem> second;
+        if (split < order.size()) second = solver->copy_for(second_working);
+        results.contact_chains = second ? 2 : 1;
+        if (second) {
+            std::future<double> other = std::async(std::launch::async, [&] {
+                return run_chain(order.subspan(split), *second, second_working);
+            });
+            rcond = std::min(rcond, run_chain(order.first(split), *solver, working));
+            rcond = std::min(rcond, other.get());
+        } else {
+            rcond = std::min(rcond, run_chain(order, *solver, working));
         }
     }
     recover_stresses(p, working, results.cases);

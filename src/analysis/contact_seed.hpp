@@ -47,8 +47,13 @@ struct ContactHooks {
     // A seed to start case `i` from, or nullopt for the usual start (the
     // previous case's set). May block until the seed exists.
     std::function<std::optional<ContactSeed>(size_t i)> seed_for;
-    // Called once case `i` has settled, with its seed.
+    // Called once case `i` has settled, with its seed. May be called from
+    // two threads at once (see threads).
     std::function<void(size_t i, const ContactSeed&)> settled;
+    // Threads the cases may settle on: 2 lets analyse() split them into two
+    // chains, the second on a copy of the factor, where every case has a
+    // seed (for a caller that leaves a core idle meanwhile).
+    int threads = 1;
 };
 
 // Seeds passed from one analysis (publish) to another running on another

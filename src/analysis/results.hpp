@@ -48,6 +48,7 @@ struct Results {
     // residual); analysis/solution_checks.hpp gives the thresholds.
     std::vector<std::string> warnings;
     double reciprocal_condition = 0; // smallest estimate over the factorizations
+    int contact_chains = 0;          // chains of contact cases solved side by side (0: none)
 };
 
 } // namespace lapwing::analysis

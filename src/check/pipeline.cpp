@@ -108,16 +108,29 @@ void check_resources(const model::Connection& c, bool two_mesh, long max_dofs) {
                               "model's own mesh; --single-mesh skips it)");
 }
 
-bool solves_concurrently(const model::Connection& c, const CheckOptions& options) {
+// Whether a second core is there for the convergence mesh, and memory for
+// both meshes and `fine_factors` copies of the finer mesh's factor at once.
+bool room_beside(const model::Connection& c, const CheckOptions& options, int fine_factors) {
     if (!options.two_mesh || !options.concurrent || options.cache) return false;
     if (std::thread::hardware_concurrency() < 2) return false;
-    // Both meshes in memory at once: the model's (about a quarter of the
-    // finer one's) on top of the finer mesh's own peak.
+    // The model's mesh is about a quarter of the finer one; each estimate is
+    // a mesh's whole peak, so a second factor is counted as a second peak.
     const mesh::MeshSettings settings = analysis::mesh_settings(c);
     const mesh::MeshSettings fine = fine_mesh_settings(analysis::plate_layout(c).region, settings);
     const double bytes = analysis::estimate_resources(c, settings).bytes +
-                         analysis::estimate_resources(c, fine).bytes;
+                         fine_factors * analysis::estimate_resources(c, fine).bytes;
     return bytes <= static_cast<double>(analysis::default_max_dofs) * analysis::bytes_per_dof;
+}
+
+bool solves_concurrently(const model::Connection& c, const CheckOptions& options) {
+    return room_beside(c, options, 1);
+}
+
+// The convergence mesh's contact cases settle on two threads where there is
+// room for a second factor: its factorization outlasts the model's mesh, so
+// the second core is idle by then.
+int fine_contact_threads(const model::Connection& c, const CheckOptions& options) {
+    return room_beside(c, options, 2) ? 2 : 1;
 }
 
 CheckOutcome check_connection(const model::Connection& c, const CheckOptions& options) {
@@ -135,7 +148,9 @@ CheckOutcome check_connection(const model::Connection& c, const CheckOptions& op
     // model mesh's settled set (fewer passes, the same settled set), in
     // either order of running.
     analysis::ContactBoard board(c.load_cases.size() + c.combinations.size());
-    const analysis::ContactHooks publish = board.publisher(), read = board.reader();
+    const analysis::ContactHooks publish = board.publisher();
+    analysis::ContactHooks read = board.reader();
+    read.threads = fine_contact_threads(c, options);
     mesh::MeshSettings fine_settings;
     if (options.two_mesh)
         fine_settings = fine_mesh_settings(analysis::plate_layout(c).region, settings);

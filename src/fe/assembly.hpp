@@ -31,6 +31,8 @@ class Assembler {
 public:
     // Builds the pattern of the model's elements and springs under `map`.
     Assembler(const Model& model, const DofMap& map);
+    // A copy of `other` under `map`, a copy of other's dof map.
+    Assembler(const Assembler& other, const DofMap& map) : Assembler(other) { map_ = &map; }
 
     const SparsePattern& pattern() const { return pattern_; }
 

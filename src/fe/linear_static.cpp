@@ -64,6 +64,20 @@ LinearStaticProblem::LinearStaticProblem(const Model& model, Constraints constra
     check_and_factorize();
 }
 
+LinearStaticProblem::LinearStaticProblem(const LinearStaticProblem& other, const Model& model,
+                                         std::unique_ptr<SparseCholesky> cholesky)
+    : model_(&model), constraints_(other.constraints_), map_(other.map_),
+      assembler_(std::make_unique<Assembler>(*other.assembler_, map_)), values_(other.values_),
+      prescribed_load_(other.prescribed_load_), cholesky_(std::move(cholesky)),
+      factored_link_k_(other.factored_link_k_), stats_(other.stats_) {}
+
+std::unique_ptr<LinearStaticProblem> LinearStaticProblem::copy_for(const Model& model) const {
+    std::unique_ptr<SparseCholesky> cholesky = cholesky_->clone();
+    if (!cholesky) return nullptr;
+    return std::unique_ptr<LinearStaticProblem>(
+        new LinearStaticProblem(*this, model, std::move(cholesky)));
+}
+
 void LinearStaticProblem::refactorize(const Model& model) {
     model_ = &model;
     assemble_and_factorize();

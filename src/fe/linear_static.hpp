@@ -74,6 +74,12 @@ public:
     LinearStaticProblem(const LinearStaticProblem&) = delete;
     LinearStaticProblem& operator=(const LinearStaticProblem&) = delete;
 
+    // An independent copy of this problem in its current state (values and
+    // factor), over `model`, which has this problem's topology and must
+    // outlive the copy: to change springs and solve on another thread.
+    // nullptr where the solver back end cannot copy its factor.
+    std::unique_ptr<LinearStaticProblem> copy_for(const Model& model) const;
+
     Solution solve(const Loads& loads) const;
     // One factorization, many right-hand sides.
     std::vector<Solution> solve(std::span<const Loads> load_cases) const;
@@ -92,6 +98,8 @@ public:
     const ProblemStats& stats() const { return stats_; }
 
 private:
+    LinearStaticProblem(const LinearStaticProblem& other, const Model& model,
+                        std::unique_ptr<SparseCholesky> cholesky);
     void assemble_and_factorize();
     // The support check and the factorization of the assembled values.
     void check_and_factorize();

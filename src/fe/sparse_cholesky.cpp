@@ -304,6 +304,27 @@ public:
     }
     FactorStats stats() const override { return stats_; }
 
+    std::unique_ptr<SparseCholesky> clone() const override {
+        SolverOptions options;
+        options.backend = SolverBackend::cholmod;
+        options.ordering = ordering_;
+        options.poor_fill_flops_per_entry = poor_fill_flops_per_entry_;
+        auto copy = std::make_unique<Cholmod>(options);
+        const auto copied = [&](cholmod_factor* f) {
+            if (!f) return f;
+            cholmod_factor* c = cholmod_copy_factor(f, &copy->common_);
+            if (!c)
+                throw std::runtime_error(fmt::format(
+                    "CHOLMOD could not copy the factor (status {})", copy->common_.status));
+            return c;
+        };
+        copy->factor_ = copied(factor_);
+        copy->symbolic_ = copied(symbolic_);
+        copy->modified_ = modified_;
+        copy->stats_ = stats_;
+        return copy;
+    }
+
     // CHOLMOD's multiple-rank update and downdate (Davis & Hager 2001, SIAM
     // J. Matrix Anal. Appl. 22:997–1013), which turns the factor into a
     // simplicial LDLᵀ. It works on the rows of L, so the columns are

@@ -100,6 +100,9 @@ public:
         return false;
     }
     virtual FactorStats stats() const = 0;
+    // An independent copy of the analysis and the factor, to modify and
+    // solve on another thread; nullptr where the back end cannot copy.
+    virtual std::unique_ptr<SparseCholesky> clone() const { return nullptr; }
 };
 
 std::unique_ptr<SparseCholesky> make_sparse_cholesky(const SolverOptions& options);
