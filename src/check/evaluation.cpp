@@ -89,11 +89,12 @@ Evaluation evaluate(const model::Connection& c, const mesh::MeshSettings& settin
         e.weld_forces.push_back(std::move(wf));
     }
     // Each line's geometry (crossings, located points, free-body cut) once,
-    // for every case.
+    // for every case; the elements' neighbours once for every line.
     e.section_stress.assign(e.results.cases.size(), {});
+    const ElementNeighbours neighbours = element_neighbours(p.model);
     for (size_t s = 0; s < e.sections.size(); ++s) {
-        std::vector<SectionStress> per_case =
-            integrate_section(e.sections[s], p.model, locator, displacements, c.plate.thickness);
+        std::vector<SectionStress> per_case = integrate_section(
+            e.sections[s], p.model, locator, displacements, c.plate.thickness, &neighbours);
         for (size_t k = 0; k < per_case.size(); ++k) {
             per_case[k].section = static_cast<int>(s);
             e.section_stress[k].push_back(std::move(per_case[k]));

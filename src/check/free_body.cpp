@@ -76,8 +76,42 @@ void keep_touching(const fe::Model& model, int n_candidates, const Weight& weigh
 
 } // namespace
 
+ElementNeighbours element_neighbours(const fe::Model& model) {
+    // Element edges by their corner pair, sorted so that an interior edge's
+    // two elements sit next to each other.
+    struct EdgeOf {
+        std::pair<int, int> corners;
+        int element;
+    };
+    std::vector<EdgeOf> edges;
+    edges.reserve(4 * model.elements.size());
+    for (int e = 0; e < static_cast<int>(model.elements.size()); ++e) {
+        const fe::Element& el = model.elements[static_cast<size_t>(e)];
+        for (int j = 0; j < 4; ++j)
+            edges.push_back({std::minmax(el.nodes[static_cast<size_t>(j)],
+                                         el.nodes[static_cast<size_t>((j + 1) % 4)]),
+                             e});
+    }
+    std::sort(edges.begin(), edges.end(), [](const EdgeOf& x, const EdgeOf& y) {
+        return x.corners < y.corners || (x.corners == y.corners && x.element < y.element);
+    });
+    ElementNeighbours out;
+    for (size_t k = 0; k + 1 < edges.size(); ++k)
+        if (edges[k].corners == edges[k + 1].corners)
+            out.pairs.emplace_back(edges[k].element, edges[k + 1].element);
+    return out;
+}
+
 std::optional<FreeBodyCut> free_body_cut(const SectionLine& line, const fe::Model& model,
                                          double about) {
+    // A weld line (the whole plate) or an empty one needs no neighbours.
+    if (line.kind == SectionKind::weld || line.length() <= 0)
+        return free_body_cut(line, model, ElementNeighbours{}, about);
+    return free_body_cut(line, model, element_neighbours(model), about);
+}
+
+std::optional<FreeBodyCut> free_body_cut(const SectionLine& line, const fe::Model& model,
+                                         const ElementNeighbours& neighbours, double about) {
     const double length = line.length();
     if (length <= 0 || model.elements.empty()) return std::nullopt;
     const Vector2d tangent = line.tangent(), normal = line.normal();
@@ -119,33 +153,12 @@ std::optional<FreeBodyCut> free_body_cut(const SectionLine& line, const fe::Mode
         centroid[static_cast<size_t>(e)] = 0.25 * c;
         offset[static_cast<size_t>(e)] = normal.dot(0.25 * c - line.from);
     }
-    // Neighbours across element edges (by corner pairs); an edge between
-    // centroids on opposite sides is cut when the segment joining the
-    // centroids crosses the line between its ends.
-    // Element edges by their corner pair, sorted so that an interior
-    // edge's two elements sit next to each other.
-    struct EdgeOf {
-        std::pair<int, int> corners;
-        int element;
-    };
-    std::vector<EdgeOf> edges;
-    edges.reserve(4 * static_cast<size_t>(n_elements));
-    for (int e = 0; e < n_elements; ++e) {
-        const fe::Element& el = model.elements[static_cast<size_t>(e)];
-        for (int j = 0; j < 4; ++j)
-            edges.push_back({std::minmax(el.nodes[static_cast<size_t>(j)],
-                                         el.nodes[static_cast<size_t>((j + 1) % 4)]),
-                             e});
-    }
-    std::sort(edges.begin(), edges.end(), [](const EdgeOf& x, const EdgeOf& y) {
-        return x.corners < y.corners || (x.corners == y.corners && x.element < y.element);
-    });
+    // An edge between centroids on opposite sides is cut when the segment
+    // joining the centroids crosses the line between its ends.
     std::vector<int> parent(static_cast<size_t>(n_elements));
     std::iota(parent.begin(), parent.end(), 0);
     std::vector<std::pair<int, int>> cut_edges; // (element on −n side, element on +n side)
-    for (size_t k = 0; k + 1 < edges.size(); ++k) {
-        if (edges[k].corners != edges[k + 1].corners) continue;
-        const int e = edges[k].element, o = edges[k + 1].element;
+    for (const auto& [e, o] : neighbours.pairs) {
         const double de = offset[static_cast<size_t>(e)], dn = offset[static_cast<size_t>(o)];
         bool crosses = false;
         if ((de > 0) != (dn > 0)) {

@@ -42,6 +42,15 @@ struct FreeBodyCut {
 };
 std::optional<FreeBodyCut> free_body_cut(const SectionLine& line, const fe::Model& model,
                                          double about);
+
+// The pairs of elements that share an edge (by its corner nodes), each pair
+// once: the mesh's part of a cut, the same for every line of a model.
+struct ElementNeighbours {
+    std::vector<std::pair<int, int>> pairs;
+};
+ElementNeighbours element_neighbours(const fe::Model& model);
+std::optional<FreeBodyCut> free_body_cut(const SectionLine& line, const fe::Model& model,
+                                         const ElementNeighbours& neighbours, double about);
 FreeBodyResultant free_body_resultant(const FreeBodyCut& cut, const fe::Model& model,
                                       const Eigen::VectorXd& u);
 

@@ -168,7 +168,7 @@ struct LinePoints {
 };
 
 LinePoints line_points(const SectionLine& line, const fe::Model& model,
-                       const fe::PointLocator& locator) {
+                       const fe::PointLocator& locator, const ElementNeighbours* neighbours) {
     LinePoints out;
     Frame& f = out.frame;
     f = Frame{line.from, line.tangent(), line.normal(), line.length(), 0};
@@ -221,7 +221,8 @@ LinePoints line_points(const SectionLine& line, const fe::Model& model,
         }
         out.pieces.push_back(std::move(points));
     }
-    out.cut = free_body_cut(line, model, out.centre);
+    out.cut = neighbours ? free_body_cut(line, model, *neighbours, out.centre)
+                         : free_body_cut(line, model, out.centre);
     return out;
 }
 
@@ -279,8 +280,9 @@ SectionStress integrate(const SectionLine& line, const LinePoints& points, const
 std::vector<SectionStress> integrate_section(const SectionLine& line, const fe::Model& model,
                                              const fe::PointLocator& locator,
                                              std::span<const Eigen::VectorXd* const> u,
-                                             double thickness) {
-    const LinePoints points = line_points(line, model, locator);
+                                             double thickness,
+                                             const ElementNeighbours* neighbours) {
+    const LinePoints points = line_points(line, model, locator, neighbours);
     std::vector<SectionStress> out;
     out.reserve(u.size());
     for (const Eigen::VectorXd* one : u)

@@ -2,6 +2,7 @@
 // average and linearized stresses, and the profile for the calc sheet.
 #pragma once
 
+#include "check/free_body.hpp"
 #include "check/section.hpp"
 #include "fe/model.hpp"
 #include "fe/point_locator.hpp"
@@ -30,10 +31,12 @@ SectionStress integrate_section(const SectionLine& line, const fe::Model& model,
 
 // The same for several displacement vectors (load cases) of one model: the
 // crossings, the points' elements and the free body's cut are found once.
+// `neighbours`, the model's element_neighbours() for many lines, or null.
 std::vector<SectionStress> integrate_section(const SectionLine& line, const fe::Model& model,
                                              const fe::PointLocator& locator,
                                              std::span<const Eigen::VectorXd* const> u,
-                                             double thickness);
+                                             double thickness,
+                                             const ElementNeighbours* neighbours = nullptr);
 
 // Distance along the line of the material's centroid (the point M is taken
 // about), mm from `from`.
