@@ -12,6 +12,7 @@
 #include <fmt/format.h>
 #include <functional>
 #include <future>
+#include <limits>
 #include <numbers>
 #include <optional>
 #include <set>
@@ -378,8 +379,13 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         // second chain starts on a copy of the first factorization, from its
         // first case's seed. Each chain is the same sequence of passes
         // whatever the threads' timing, so the results do not depend on it.
+        // `before_change` is called before each pass but the chain's first
+        // (whose set is the one its factor was made with) may change the
+        // factor.
         const auto run_chain = [&](std::span<const size_t> chain,
-                                   fe::LinearStaticProblem& chain_solver, fe::Model& chain_model) {
+                                   fe::LinearStaticProblem& chain_solver, fe::Model& chain_model,
+                                   const std::function<void()>& before_change) {
+            bool first_pass = true;
             double chain_rcond = chain_solver.stats().factor.rcond;
             std::vector<bool> start_set(k0.size(), true);
             size_t previous = chain.front();
@@ -407,6 +413,8 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 for (int iteration = 1; iteration <= max_contact_iterations; ++iteration) {
                     for (size_t j = 0; j < k0.size(); ++j)
                         chain_model.link_springs[j].k = active[j] ? k0[j] : 0.0;
+                    if (!first_pass && before_change) before_change();
+                    first_pass = false;
                     try {
                         chain_solver.update_link_springs(chain_model);
                     } catch (const AnalysisError& e) {
@@ -462,18 +470,35 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         const size_t split = hooks && hooks->threads > 1 ? chain_split(contact_order, seeded_start)
                                                          : contact_order.size();
         const std::span<const size_t> order(contact_order);
-        fe::Model second_working = working;
-        std::unique_ptr<fe::LinearStaticProblem> second;
-        if (split < order.size()) second = solver->copy_for(second_working);
-        results.contact_chains = second ? 2 : 1;
-        if (second) {
+        results.contact_chains = 1;
+        if (split < order.size()) {
+            // The copy is made on the second chain's thread while the first
+            // chain's first pass solves on the same factor (both only read
+            // it); the first chain changes its factor once the copy exists.
+            fe::Model second_working = working;
+            std::unique_ptr<fe::LinearStaticProblem> second;
+            std::promise<bool> copy_made;
+            std::shared_future<bool> copied = copy_made.get_future().share();
             std::future<double> other = std::async(std::launch::async, [&] {
-                return run_chain(order.subspan(split), *second, second_working);
+                try {
+                    second = solver->copy_for(second_working);
+                } catch (...) {
+                    copy_made.set_exception(std::current_exception());
+                    throw;
+                }
+                copy_made.set_value(second != nullptr);
+                return second ? run_chain(order.subspan(split), *second, second_working, {})
+                              : std::numeric_limits<double>::infinity();
             });
-            rcond = std::min(rcond, run_chain(order.first(split), *solver, working));
+            rcond = std::min(
+                rcond, run_chain(order.first(split), *solver, working, [&] { copied.wait(); }));
             rcond = std::min(rcond, other.get());
+            if (copied.get())
+                results.contact_chains = 2;
+            else // a back end that cannot copy its factor: one chain after all
+                rcond = std::min(rcond, run_chain(order.subspan(split), *solver, working, {}));
         } else {
-            rcond = std::min(rcond, run_chain(order, *solver, working));
+            rcond = std::min(rcond, run_chain(order, *solver, working, {}));
         }
     }
     recover_stresses(p, working, results.cases);
