@@ -50,9 +50,10 @@ struct ContactHooks {
     // Called once case `i` has settled, with its seed. May be called from
     // two threads at once (see threads).
     std::function<void(size_t i, const ContactSeed&)> settled;
-    // Threads the cases may settle on: 2 lets analyse() split them into two
-    // chains, the second on a copy of the factor, where every case has a
-    // seed (for a caller that leaves a core idle meanwhile).
+    // Threads the analysis may use, for a caller that leaves a core idle
+    // meanwhile: 2 lets analyse() settle the cases as two chains, the second
+    // on a copy of the factor, where every case has a seed, and recover the
+    // cases' stresses two at a time.
     int threads = 1;
 };
 

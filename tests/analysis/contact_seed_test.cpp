@@ -53,6 +53,18 @@ void check_same(const analysis::Results& cold, const analysis::Results& warm) {
                   1e-9 * scale);
         CHECK((cold.cases[i].u - warm.cases[i].u).lpNorm<Eigen::Infinity>() <=
               1e-9 * cold.cases[i].u.lpNorm<Eigen::Infinity>());
+        // The recovered nodal stresses (recovered two cases at a time with
+        // two threads) follow the displacements, to the same round-off.
+        const auto& a = cold.cases[i].nodal_stress;
+        const auto& b = warm.cases[i].nodal_stress;
+        REQUIRE(a.size() == b.size());
+        REQUIRE(!a.empty());
+        double peak = 0, worst = 0;
+        for (size_t n = 0; n < a.size(); ++n)
+            peak = std::max(peak, a[n].cwiseAbs().maxCoeff()),
+            worst = std::max(worst, (a[n] - b[n]).cwiseAbs().maxCoeff());
+        CHECK(peak > 0);
+        CHECK(worst <= 1e-8 * peak);
     }
 }
 
