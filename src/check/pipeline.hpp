@@ -48,10 +48,13 @@ struct CheckOptions {
     // line.
     std::function<void(Stage)> on_stage;
     // With two_mesh, solve the convergence mesh on a second thread while the
-    // model's mesh is solved and checked. The results are those of the
-    // sequential order, bit for bit: the convergence mesh starts each load
-    // case's contact iteration from the model mesh's settled set in either
-    // order (analysis::ContactBoard). Used only without a cache, on a
+    // model's mesh is solved and checked. The model mesh's results are those
+    // of the sequential order bit for bit: the convergence mesh starts each
+    // load case's contact iteration from the model mesh's settled set in
+    // either order (analysis::ContactBoard). The convergence mesh's agree to
+    // round-off: once the model's mesh is done, its contact cases may settle
+    // as two chains on the two cores (analysis::ContactHooks::threads), where
+    // memory holds a second copy of its factor. Used only without a cache, on a
     // machine with two or more cores, and when both meshes' estimated memory
     // fits the budget the default dof limit stands for.
     bool concurrent = true;

@@ -116,11 +116,16 @@ TEST_CASE("check pipeline: the model-mesh callback sees the final outcome but fo
     CHECK(*finished);
 }
 
-TEST_CASE("check pipeline: the concurrent convergence mesh gives the sequential results bit for "
-          "bit, and the stage callback stays on the calling thread") {
-    // The two orders run the same arithmetic (each case's contact start on
-    // the finer mesh comes from the model mesh's settled set either way), so
-    // equality is exact, not to a tolerance.
+TEST_CASE("check pipeline: the concurrent convergence mesh gives the sequential results (the "
+          "model mesh's bit for bit), and the stage callback stays on the calling thread") {
+    // The model's mesh runs the same arithmetic in both orders (each case's
+    // contact start on the finer mesh comes from the model mesh's settled
+    // set either way), so its results are equal exactly. Run concurrently,
+    // the finer mesh's cases may settle as two chains on two threads, the
+    // second on a copy of the first factorization: the same settled sets,
+    // reached through other factor modifications, so its numbers agree to
+    // the round-off the contact iteration holds (residual 1e-10; 1e-9
+    // relative, as tests/analysis/contact_seed_test.cpp).
     const model::Connection c = load_template("truss-gusset.toml", {"mesh.size=24"});
     check::CheckOptions options;
     options.concurrent = false;
@@ -142,7 +147,7 @@ TEST_CASE("check pipeline: the concurrent convergence mesh gives the sequential 
         const check::ConvergenceRow& b = concurrent.convergence.rows[k];
         CAPTURE(a.quantity);
         CHECK(a.coarse == b.coarse);
-        CHECK(a.fine == b.fine);
+        CHECK(std::abs(a.fine - b.fine) <= 1e-9 * std::max(1.0, std::abs(a.fine)));
     }
     CHECK(concurrent.convergence.fine_dofs == sequential.convergence.fine_dofs);
     REQUIRE(concurrent.results.cases.size() == sequential.results.cases.size());
