@@ -98,11 +98,10 @@ PeakStress find_peaks(const analysis::FeProblem& problem, const analysis::PlateL
     };
     const auto consider = [&](const fe::Stress& s, const Eigen::Vector2d& at) {
         const double v = fe::von_mises(s);
-        // Principal values by Mohr's circle (fe::principal without its angle).
-        const double c = 0.5 * (s(0) + s(1)), r = std::hypot(0.5 * (s(0) - s(1)), s(2));
+        const fe::PrincipalValues p = fe::principal_values(s);
         if (v > vm.value) vm = {v, at};
-        if (c + r > s1.value) s1 = {c + r, at};
-        if (c - r < s2.value) s2 = {c - r, at};
+        if (p.s1 > s1.value) s1 = {p.s1, at};
+        if (p.s2 < s2.value) s2 = {p.s2, at};
         // Which zone a point lies in matters only where it would raise that
         // zone's peak: most points are below both and skip the hole search.
         if (v <= away.value && v <= at_holes.value) return;

@@ -128,9 +128,8 @@ double von_mises(const Stress& s) {
 }
 
 Principal principal(const Stress& s) {
-    const double c = 0.5 * (s(0) + s(1));
-    const double r = std::hypot(0.5 * (s(0) - s(1)), s(2));
-    return {c + r, c - r, 0.5 * std::atan2(2.0 * s(2), s(0) - s(1))};
+    const PrincipalValues v = principal_values(s);
+    return {v.s1, v.s2, 0.5 * std::atan2(2.0 * s(2), s(0) - s(1))};
 }
 
 } // namespace lapwing::fe

@@ -6,6 +6,7 @@
 #include "fe/model.hpp"
 
 #include <Eigen/Core>
+#include <cmath>
 #include <span>
 #include <vector>
 
@@ -33,11 +34,22 @@ std::vector<SampledStresses> sample_stresses(const Model& model,
 // Plane-stress von Mises: √(σx² − σxσy + σy² + 3τ²).
 double von_mises(const Stress& s);
 
+struct PrincipalValues {
+    double s1 = 0, s2 = 0; // s1 ≥ s2
+};
+// Mohr's circle: c ± r, c = (σx+σy)/2, r = √(((σx−σy)/2)² + τ²). Inline:
+// the peak search takes it at every sample point.
+inline PrincipalValues principal_values(const Stress& s) {
+    const double c = 0.5 * (s(0) + s(1));
+    const double r = std::hypot(0.5 * (s(0) - s(1)), s(2));
+    return {c + r, c - r};
+}
+
 struct Principal {
     double s1 = 0, s2 = 0; // s1 ≥ s2
     double angle_rad = 0;  // direction of s1 from the x axis
 };
-// Mohr's circle: c ± √(((σx−σy)/2)² + τ²), tan 2θ = 2τ / (σx − σy).
+// principal_values with the direction: tan 2θ = 2τ / (σx − σy).
 Principal principal(const Stress& s);
 
 } // namespace lapwing::fe
