@@ -390,9 +390,9 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
         // second chain starts on a copy of the first factorization, from its
         // first case's seed. Each chain is the same sequence of passes
         // whatever the threads' timing, so the results do not depend on it.
-        // `before_change` is called before each pass but the chain's first
-        // (whose set is the one its factor was made with) may change the
-        // factor.
+        // `before_change` is called before anything but the chain's first
+        // pass (whose set is the one its factor was made with) may change the
+        // factor: the later passes' modifications and any refactorization.
         const auto run_chain = [&](std::span<const size_t> chain,
                                    fe::LinearStaticProblem& chain_solver, fe::Model& chain_model,
                                    const std::function<void()>& before_change) {
@@ -463,6 +463,7 @@ Results analyse(const model::Connection& c, const mesh::Mesh& mesh, const PlateL
                 fe::Solution s =
                     named(specs, {i}, [&] { return chain_solver.solution_of(loads, unknowns); });
                 if (!(s.relative_residual <= 1e-10)) {
+                    if (before_change) before_change();
                     try {
                         chain_solver.refactorize(chain_model);
                     } catch (const AnalysisError& e) {

@@ -21,10 +21,10 @@ public:
     // model's values. The kept problem is reused when the topology (elements,
     // springs, link springs, rotation dofs) and the constraints equal those
     // it was built for; otherwise a new one replaces it. The problem refers
-    // to `model` until the next call. `before_values` is called before the
-    // values are assembled, after the pattern and the ordering where they
-    // are built (the LinearStaticProblem constructor's). Throws AnalysisError
-    // as that constructor does.
+    // to `model` until the next call. `before_values` may change the link
+    // springs' stiffness before the factorization: a new problem calls it as
+    // the LinearStaticProblem constructor does, a kept one before it
+    // refactorizes. Throws AnalysisError as that constructor does.
     fe::LinearStaticProblem& problem_for(const fe::Model& model, const fe::Constraints& constraints,
                                          const std::function<void()>& before_values = {});
 

@@ -91,7 +91,6 @@ void LinearStaticProblem::assemble_and_factorize() {
 }
 
 void LinearStaticProblem::check_and_factorize() {
-
     const auto free =
         free_rigid_motions(*model_, map_, constraints_, assembler_->pattern(), values_);
     if (!free.empty()) {

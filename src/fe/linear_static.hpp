@@ -44,13 +44,12 @@ public:
     // AnalysisError when the model is not restrained against rigid-body
     // motion, has a mechanism, or has an inverted element.
     //
-    // `before_values`, when given, is called once the sparse pattern and the
-    // fill-reducing ordering are made (they depend on the topology alone)
-    // and before the values are assembled: it may change the model's values
-    // and may block, e.g. until a contact start set computed on another
-    // thread exists, so that the pattern work overlaps the wait. It may
-    // change only the link springs' stiffness: the rest of the values is
-    // assembled before it is called.
+    // `before_values`, when given, is called once the sparse pattern, the
+    // fill-reducing ordering (both depend on the topology alone) and every
+    // value but the link springs' are made, before the factorization: it
+    // may change the link springs' stiffness, and nothing else, and may
+    // block, e.g. until a contact start set computed on another thread
+    // exists, so that the work before it overlaps the wait.
     LinearStaticProblem(const Model& model, Constraints constraints, SolverOptions options = {},
                         const std::function<void()>& before_values = {});
 

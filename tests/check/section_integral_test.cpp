@@ -316,10 +316,18 @@ TEST_CASE("the corner-gusset template: stress integral against the free body on 
     const fe::PointLocator locator(model);
     const auto& dead = run.results.cases.at(0);
     REQUIRE(dead.name == "dead");
+    // The element neighbours built once for every line (as evaluate() does)
+    // give each line's own cut: the same numbers to the last bit.
+    const check::ElementNeighbours neighbours = check::element_neighbours(model);
+    const Eigen::VectorXd* u_dead = &dead.u;
     for (const auto& line : lines) {
         CAPTURE(line.id);
         const auto s =
             check::integrate_section(line, model, locator, dead.u, run.connection.plate.thickness);
+        const auto shared = check::integrate_section(line, model, locator, std::span(&u_dead, 1),
+                                                     run.connection.plate.thickness, &neighbours);
+        CHECK(shared.front().N_free_body == s.N_free_body);
+        CHECK(shared.front().M_free_body == s.M_free_body);
         REQUIRE(s.free_body); // on this plate every line runs edge to edge
         const double change = (s.N - s.N_free_body) / s.N_free_body;
         MESSAGE(std::setprecision(6) << line.id << ": N = " << s.N << " N, free body "
