@@ -133,7 +133,11 @@ TEST_CASE("contact seed: the finer mesh's cases settled as two chains on two thr
         const analysis::Results cold = analysis::analyse(t.c, t.fine, t.layout);
         const analysis::Results two = analysis::analyse(t.c, t.fine, t.layout, nullptr, &read);
         CHECK(cold.contact_chains == 1);
+#ifdef LAPWING_HAVE_CHOLMOD
         CHECK(two.contact_chains == 2);
+#else
+        CHECK(two.contact_chains == 1); // Eigen's LDLT cannot copy its factor: one chain
+#endif
         check_same(cold, two);
     }
 }
