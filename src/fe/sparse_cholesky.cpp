@@ -159,7 +159,11 @@ class Cholmod final : public SparseCholesky {
 public:
     explicit Cholmod(const SolverOptions& options)
         : ordering_(options.ordering),
-          poor_fill_flops_per_entry_(options.poor_fill_flops_per_entry) {
+          poor_fill_flops_per_entry_(options.poor_fill_flops_per_entry),
+          kernels_(options.dense_kernels) {
+        if (kernels_ == DenseKernels::automatic)
+            kernels_ = blas_in_use().reference ? DenseKernels::eigen : DenseKernels::blas;
+        stats_.kernels = kernels_ == DenseKernels::eigen ? "Eigen" : "BLAS";
         cholmod_start(&common_);
         common_.supernodal = CHOLMOD_SUPERNODAL;
         common_.final_ll = 1;
@@ -269,7 +273,10 @@ public:
         }
         const auto start = std::chrono::steady_clock::now();
         cholmod_sparse A = view(pattern, values);
-        cholmod_factorize(&A, factor_, &common_);
+        if (kernels_ == DenseKernels::eigen)
+            supernodal_numeric(A, factor_, &common_);
+        else
+            cholmod_factorize(&A, factor_, &common_);
         stats_.seconds_factorize = seconds_since(start);
         if (common_.status == CHOLMOD_NOT_POSDEF || factor_->minor < factor_->n) {
             const auto* perm = static_cast<const int*>(factor_->Perm);
@@ -309,6 +316,7 @@ public:
         options.backend = SolverBackend::cholmod;
         options.ordering = ordering_;
         options.poor_fill_flops_per_entry = poor_fill_flops_per_entry_;
+        options.dense_kernels = kernels_;
         auto copy = std::make_unique<Cholmod>(options);
         const auto copied = [&](cholmod_factor* f) {
             if (!f) return f;
@@ -546,6 +554,7 @@ private:
     static constexpr double poor_fill_entries_ratio = 5;
     Ordering ordering_;
     double poor_fill_flops_per_entry_;
+    DenseKernels kernels_;
     mutable cholmod_common common_{};
     cholmod_factor* factor_ = nullptr;
     cholmod_factor* symbolic_ = nullptr; // copy of the analysis, for after modify()

@@ -6,6 +6,7 @@
 #pragma once
 
 #include "fe/assembly.hpp"
+#include "fe/supernodal_numeric.hpp"
 
 #include <Eigen/Core>
 #include <Eigen/SparseCore>
@@ -56,15 +57,22 @@ struct SolverOptions {
     // has at least 5 entries per entry of A). 500 is CHOLMOD's own threshold
     // (cholmod_analyze, Common->method[0].fl_ratio... in its user guide).
     double poor_fill_flops_per_entry = 500;
+    // CHOLMOD's numeric factorization through the BLAS, or the same
+    // supernodal algorithm with Eigen's dense kernels (fe/supernodal_numeric.hpp);
+    // automatic takes Eigen's where the reference BLAS is the one loaded,
+    // about 5 times slower than Eigen's products on this project's machines
+    // (docs/benchmarks.md), and leaves any other BLAS to CHOLMOD.
+    DenseKernels dense_kernels = DenseKernels::automatic;
 };
 
 struct FactorStats {
     std::string backend;
-    std::string ordering; // the ordering actually used
-    double nnz_A = 0;     // lower triangle of the reduced matrix
-    double nnz_L = 0;     // factor non-zeros
-    double flops = 0;     // floating-point operations of the numeric factorization
-    double rcond = 0;     // reciprocal condition estimate (min/max diag of L)²
+    std::string ordering;  // the ordering actually used
+    std::string kernels{}; // the dense kernels of the numeric factorization
+    double nnz_A = 0;      // lower triangle of the reduced matrix
+    double nnz_L = 0;      // factor non-zeros
+    double flops = 0;      // floating-point operations of the numeric factorization
+    double rcond = 0;      // reciprocal condition estimate (min/max diag of L)²
     double seconds_analyse = 0;
     double seconds_factorize = 0;
 };

@@ -10,6 +10,7 @@
 // Without ccx on the PATH it says so and exits 0.
 #include "calculix_deck.hpp"
 #include "fe/recovery.hpp"
+#include "kernels_option.hpp"
 #include "measure.hpp"
 #include "plate_with_hole.hpp"
 
@@ -40,6 +41,7 @@ struct Options {
     fs::path dir = "calculix-runs";
     bool smoke = false;
     bool child = false; // run lapwing's part only (the timed child process)
+    fe::DenseKernels kernels = fe::SolverOptions{}.dense_kernels;
 };
 
 fe::ElementKind parse_kind(const std::string& s) {
@@ -68,10 +70,12 @@ Options parse(int argc, char** argv) {
             o.repeats = std::max(1, std::stoi(value()));
         else if (arg == "--dir")
             o.dir = value();
+        else if (arg == "--kernels")
+            o.kernels = bench::parse_kernels(value());
         else
             throw std::invalid_argument("unknown argument " + arg +
                                         " (use --smoke | --kind Q4|Q8 --dofs N [--repeats R] "
-                                        "[--dir DIR])");
+                                        "[--dir DIR] [--kernels automatic|eigen|blas])");
     }
     return o;
 }
@@ -137,9 +141,11 @@ struct LapwingResult {
 };
 
 // What the timed child does: mesh, assemble, factorize, solve, recover.
-LapwingResult solve_with_lapwing(fe::ElementKind kind, long dofs) {
+LapwingResult solve_with_lapwing(fe::ElementKind kind, long dofs, fe::DenseKernels kernels) {
     const bench::PlateModel p = bench::make_plate_with_hole(kind, dofs);
-    const fe::LinearStaticProblem problem(p.model, p.constraints);
+    fe::SolverOptions options;
+    options.dense_kernels = kernels;
+    const fe::LinearStaticProblem problem(p.model, p.constraints, options);
     LapwingResult r;
     r.u = problem.solve(p.loads).u;
     r.spr = fe::recover_spr(p.model, fe::spr_samples(p.model, r.u));
@@ -168,8 +174,10 @@ bool compare(const Options& o, const char* self, double tolerance_u, double tole
                 p.model.elements.size(), job.c_str());
 
     std::vector<double> lw_wall, lw_cpu, lw_mem, cx_wall, cx_cpu, cx_mem, r_wall, r_cpu, r_mem;
-    const std::vector<std::string> lapwing_args = {
-        self, "--child", "--kind", kind_name, "--dofs", std::to_string(o.target_dofs)};
+    const std::vector<std::string> lapwing_args = {self,        "--child",
+                                                   "--kind",    kind_name,
+                                                   "--dofs",    std::to_string(o.target_dofs),
+                                                   "--kernels", bench::kernels_name(o.kernels)};
     const std::vector<std::string> ccx_args = {"ccx", "-i", job};
     for (int r = 0; r < o.repeats; ++r) {
         // Alternate which runs first, so neither always meets a warm cache.
@@ -202,7 +210,7 @@ bool compare(const Options& o, const char* self, double tolerance_u, double tole
     print(kind_name, dofs, "ratio memory", bench::median(r_mem), n);
 
     // Agreement, on the identical mesh and loads.
-    const LapwingResult mine = solve_with_lapwing(o.kind, o.target_dofs);
+    const LapwingResult mine = solve_with_lapwing(o.kind, o.target_dofs, o.kernels);
     const int n_nodes = p.model.n_nodes();
     const Eigen::MatrixX2d u_ccx =
         bench::read_calculix_displacements(read_text(dir / (job + ".dat")), n_nodes);
@@ -245,10 +253,10 @@ int main(int argc, char** argv) {
     }
     try {
         if (o.child) {
-            const LapwingResult r = solve_with_lapwing(o.kind, o.target_dofs);
-            std::printf("max |u| %.6g; ordering %s, nnz(L) %.4g, flops %.4g\n",
-                        r.u.cwiseAbs().maxCoeff(), r.factor.ordering.c_str(), r.factor.nnz_L,
-                        r.factor.flops);
+            const LapwingResult r = solve_with_lapwing(o.kind, o.target_dofs, o.kernels);
+            std::printf("max |u| %.6g; ordering %s, kernels %s, nnz(L) %.4g, flops %.4g\n",
+                        r.u.cwiseAbs().maxCoeff(), r.factor.ordering.c_str(),
+                        r.factor.kernels.c_str(), r.factor.nnz_L, r.factor.flops);
             return 0;
         }
         if (!on_path("ccx")) {

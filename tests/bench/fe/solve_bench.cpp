@@ -7,6 +7,7 @@
 #include "fe/recovery.hpp"
 #include "fe/restraint_check.hpp"
 #include "fe/sparse_cholesky.hpp"
+#include "kernels_option.hpp"
 #include "measure.hpp"
 #include "plate_with_hole.hpp"
 #include "reference_cholmod.hpp"
@@ -31,6 +32,7 @@ struct Options {
     int repeats = 3;
     long eigen_max_dofs = 400000; // above this Eigen's LDLᵀ exceeds ~2 min here
     fe::Ordering ordering = fe::SolverOptions{}.ordering; // lapwing's default
+    fe::DenseKernels kernels = fe::SolverOptions{}.dense_kernels;
     bool problem_path = true; // also time LinearStaticProblem end to end
 };
 
@@ -113,6 +115,8 @@ Options parse(int argc, char** argv) {
             o.eigen_max_dofs = 0;
         else if (arg == "--ordering")
             o.ordering = parse_ordering(value());
+        else if (arg == "--kernels")
+            o.kernels = parse_kernels(value());
         else if (arg == "--no-problem-path")
             o.problem_path = false;
         else
@@ -120,7 +124,8 @@ Options parse(int argc, char** argv) {
                 "unknown argument " + arg +
                 " (use --smoke | --kind K --dofs N [--repeats N] "
                 "[--ordering adaptive|amd|node-amd|node-metis|node-best|nd|metis|automatic]"
-                " [--eigen-max-dofs N | --no-eigen] [--no-problem-path])");
+                " [--kernels automatic|eigen|blas] [--eigen-max-dofs N | --no-eigen] "
+                "[--no-problem-path])");
     }
     return o;
 }
@@ -179,11 +184,13 @@ void run_once(const Options& o, const PlateModel& plate, bool reference_first, R
 
     fe::SolverOptions options;
     options.ordering = o.ordering;
+    options.dense_kernels = o.kernels;
     auto cholesky = fe::make_sparse_cholesky(options);
     r.stage("analyse", measure([&] { cholesky->analyse(pattern); }));
     r.stage("factorize", measure([&] { cholesky->factorize(pattern, values); }));
     const fe::FactorStats fs = cholesky->stats();
-    std::cout << fmt::format("# lapwing's ordering: {}\n", fs.ordering);
+    std::cout << fmt::format("# lapwing's ordering: {}; dense kernels: {}\n", fs.ordering,
+                             fs.kernels);
     r.set("nnz_A", fs.nnz_A);
     r.set("nnz_L", fs.nnz_L);
     r.set("flops", fs.flops);
