@@ -15,11 +15,12 @@ else
   build=build/bench
   cmake --preset bench > /dev/null
 fi
-cmake --build "$build" -j2 --target bench_fe_solve bench_fe_elements bench_fe_calculix \
+cmake --build "$build" -j2 --target bench_fe_solve bench_fe_elements bench_fe_calculix bench_fe_gemm \
     mesh_bench bench_analysis bench_contact_start
 bin="$build/tests/bench"
 "$bin/fe/bench_fe_solve" --smoke
 "$bin/fe/bench_fe_elements" --smoke
+"$bin/fe/bench_fe_gemm" --smoke
 "$bin/fe/bench_fe_calculix" --smoke --dir "$build/smoke-calculix"
 "$bin/mesh/mesh_bench" 1 small
 "$bin/analysis/bench_analysis" --smoke
