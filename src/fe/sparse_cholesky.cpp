@@ -172,8 +172,8 @@ public:
         // parent when the merged one has at most nrelax[0..2] columns or at
         // most zrelax[0..2] of its entries as explicit zeros (defaults 4, 16,
         // 48 and 0.8, 0.1, 0.05; CHOLMOD User Guide, cholmod_super_symbolic).
-        // The zeros buy larger dense blocks, which pay with an optimised BLAS;
-        // with the reference BLAS they are only memory and flops. Tighter
+        // The zeros buy larger dense blocks, which pay where the dense
+        // kernels are fast; at the largest models they cost memory. Tighter
         // limits took the factor's peak at 2·10⁶ Q8 dofs from 3,936,080 to
         // 3,863,168 KiB and the demo check's instructions down by 0.4–0.7 %
         // (docs/benchmarks.md, 2026-12-03, third session).
