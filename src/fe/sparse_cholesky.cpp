@@ -1,6 +1,7 @@
 // The two factorization back ends behind one interface.
 #include "fe/sparse_cholesky.hpp"
 
+#include "fe/large_pages.hpp"
 #include "fe/nested_dissection.hpp"
 #include "fe/openmp_scope.hpp"
 
@@ -164,6 +165,7 @@ public:
         if (kernels_ == DenseKernels::automatic)
             kernels_ = blas_in_use().reference ? DenseKernels::eigen : DenseKernels::blas;
         stats_.kernels = kernels_ == DenseKernels::eigen ? "Eigen" : "BLAS";
+        use_large_pages_for_cholmod();
         cholmod_start(&common_);
         common_.supernodal = CHOLMOD_SUPERNODAL;
         common_.final_ll = 1;
